@@ -1,0 +1,247 @@
+"""Turning one sample into one verdict: assemble, render, compile, run, judge.
+
+The judge trusts only the driver's results file, whose every record must carry this run's
+nonce, and a final ``done`` record; exit status 0 alone never makes a pass.
+"""
+
+from __future__ import annotations
+
+import json
+import secrets
+import signal
+import time
+from dataclasses import asdict, dataclass, field
+from functools import lru_cache
+
+from .completions import Sample, assemble_code
+from .problems import Problem, ProblemSet
+from .runtimes import Runtime
+from .sandbox.base import Limits, Sandbox, StepResult
+from .valuetypes import values_equal
+
+OUTCOMES = (
+    "passed",
+    "wrong_answer",
+    "compile_error",
+    "runtime_error",
+    "timeout",
+    "memory_limit",
+    "output_limit",
+    "infra_error",
+)
+DETAIL_CHARS = 500
+RESULTS_MAX_BYTES = 4 * 1024 * 1024
+
+
+@dataclass
+class Verdict:
+    outcome: str
+    cases_passed: int
+    cases_total: int
+    seconds: float
+    detail: str = ""
+    extra: dict = field(default_factory=dict)
+
+    def row(self, sample: Sample) -> dict:
+        """The executions.jsonl row for ``sample``."""
+        data = {"problem": sample.problem, "language": sample.language, "sample": sample.sample}
+        data.update(asdict(self))
+        extra = data.pop("extra")
+        data.update(extra)
+        return data
+
+
+class Executor:
+    """Runs samples of one problem set with fixed runtimes, mode and limits. Thread-safe."""
+
+    def __init__(
+        self,
+        sandbox: Sandbox,
+        problems: ProblemSet,
+        runtimes: dict[str, Runtime],
+        mode: str = "continue",
+        limit_overrides: dict | None = None,
+        compile_limit_overrides: dict | None = None,
+    ):
+        self.sandbox = sandbox
+        self.problems = problems
+        self.runtimes = runtimes
+        self.mode = mode
+        self.limit_overrides = limit_overrides or {}
+        self.compile_limit_overrides = compile_limit_overrides or {}
+        self._prompt = lru_cache(maxsize=None)(self._render_prompt)
+
+    def _render_prompt(self, problem_id: str, language: str) -> tuple[str, str]:
+        runtime = self.runtimes[language]
+        problem = self.problems.problems[problem_id]
+        return runtime.render_prompt(problem), runtime.render_preamble(problem)
+
+    def limits_for(self, runtime: Runtime) -> tuple[Limits | None, Limits]:
+        base = Limits()
+        compile_limits = None
+        if runtime.compile:
+            compile_limits = runtime.step_limits(
+                Limits(wall_seconds=60, cpu_seconds=60, memory_mb=2048, max_processes=128, max_file_mb=256),
+                runtime.compile,
+                self.compile_limit_overrides,
+            )
+        return compile_limits, runtime.step_limits(base, runtime.run, self.limit_overrides)
+
+    def program(self, sample: Sample, nonce: str, results_file: str) -> str:
+        runtime = self.runtimes[sample.language]
+        problem = self.problems.problems[sample.problem]
+        prompt, preamble = self._prompt(sample.problem, sample.language)
+        code = assemble_code(self.mode, prompt, preamble, sample.completion, runtime.stop_sequences)
+        return runtime.render_program(problem, code, results_file, nonce)
+
+    def execute(self, sample: Sample) -> Verdict:
+        started = time.monotonic()
+        runtime = self.runtimes[sample.language]
+        problem = self.problems.problems[sample.problem]
+        total = len(problem.cases)
+        nonce = secrets.token_hex(16)
+        results_file = f".results-{nonce[:12]}.jsonl"
+        try:
+            source = self.program(sample, nonce, results_file)
+        except Exception as exc:  # a template bug in the runtime, never the candidate's fault
+            return Verdict("infra_error", 0, total, 0.0, f"rendering the program failed: {exc}"[:DETAIL_CHARS])
+        compile_limits, run_limits = self.limits_for(runtime)
+        try:
+            with self.sandbox.workspace(runtime.needs) as space:
+                space.write(runtime.source_file, source)
+                if runtime.compile:
+                    built = space.run(list(runtime.compile.command), compile_limits, {})
+                    failed = _compile_failure(built, compile_limits, total, started)
+                    if failed:
+                        return failed
+                ran = space.run(list(runtime.run.command), run_limits, {})
+                results = space.read(results_file, RESULTS_MAX_BYTES) or b""
+        except Exception as exc:  # the sandbox itself broke: not the candidate's fault
+            return Verdict("infra_error", 0, total, _since(started), f"sandbox failure: {exc}"[:DETAIL_CHARS])
+        verdict = judge(problem, runtime, ran, results, nonce, run_limits)
+        verdict.seconds = _since(started)
+        if "peak_memory_mb" in ran.extra:
+            verdict.extra["peak_memory_mb"] = ran.extra["peak_memory_mb"]
+        return verdict
+
+
+def _since(started: float) -> float:
+    return round(time.monotonic() - started, 4)
+
+
+def _compile_failure(built: StepResult, limits: Limits, total: int, started: float) -> Verdict | None:
+    if built.infra_error:
+        return Verdict("infra_error", 0, total, _since(started), built.infra_error[:DETAIL_CHARS])
+    if built.timed_out:
+        detail = f"compilation exceeded its time limit ({limits.wall_seconds:g}s)"
+    elif built.memory_exceeded:
+        detail = f"compilation exceeded its memory limit ({limits.memory_mb} MB)"
+    elif built.output_exceeded:
+        detail = f"compiler output exceeded {limits.max_output_kb} KB"
+    elif built.file_size_exceeded:
+        detail = f"compiler wrote a file over {limits.max_file_mb} MB"
+    elif built.exit_code != 0:
+        detail = _tail(built.stderr or built.stdout) or f"compiler exited with status {built.exit_code}"
+    else:
+        return None
+    return Verdict("compile_error", 0, total, _since(started), detail)
+
+
+def parse_results(data: bytes, nonce: str) -> tuple[dict[int, dict], bool]:
+    """Case records by index, and whether the driver's ``done`` record arrived. Lines without
+    this run's nonce (anything the candidate may have written) are ignored."""
+    records: dict[int, dict] = {}
+    done = False
+    for line in data.splitlines():
+        try:
+            record = json.loads(line)
+        except (ValueError, RecursionError):
+            continue
+        if not isinstance(record, dict) or record.get("nonce") != nonce:
+            continue
+        if record.get("done") is True:
+            done = True
+        elif isinstance(record.get("case"), int) and not isinstance(record.get("case"), bool):
+            records.setdefault(record["case"], record)
+    return records, done
+
+
+def judge(problem: Problem, runtime: Runtime, ran: StepResult, results: bytes, nonce: str, limits: Limits) -> Verdict:
+    """Decide the outcome of a finished run from the sandbox's report and the results file."""
+    total = len(problem.cases)
+    records, done = parse_results(results, nonce)
+    passed = 0
+    first_failure: Verdict | None = None
+    for index, case in enumerate(problem.cases):
+        record = records.get(index)
+        if record is None:
+            break
+        if "error" in record:
+            if first_failure is None:
+                message = str(record["error"])
+                outcome = _error_outcome(runtime, message)
+                first_failure = Verdict(outcome, 0, total, 0.0, f"case {index}: {message}"[:DETAIL_CHARS])
+            continue
+        if values_equal(case.expected, record.get("value"), problem.returns, problem.tolerance):
+            passed += 1
+        elif first_failure is None:
+            expected = json.dumps(case.expected, ensure_ascii=False)
+            actual = json.dumps(record.get("value"), ensure_ascii=False)
+            first_failure = Verdict(
+                "wrong_answer", 0, total, 0.0,
+                _clip(f"case {index}: expected {expected}, got {actual}"),
+            )
+
+    def verdict(outcome: str, detail: str) -> Verdict:
+        return Verdict(outcome, passed, total, 0.0, _clip(detail))
+
+    if ran.infra_error:
+        return verdict("infra_error", ran.infra_error)
+    if ran.timed_out:
+        return verdict("timeout", f"exceeded the time limit ({limits.wall_seconds:g}s wall, {limits.cpu_seconds:g}s CPU)")
+    if ran.memory_exceeded:
+        return verdict("memory_limit", f"exceeded the memory limit ({limits.memory_mb} MB)")
+    if ran.output_exceeded:
+        return verdict("output_limit", f"printed more than {limits.max_output_kb} KB")
+    if ran.file_size_exceeded:
+        return verdict("output_limit", f"wrote a file larger than {limits.max_file_mb} MB")
+    if first_failure is not None:
+        first_failure.cases_passed = passed
+        return first_failure
+    if len(records) < total or not done:
+        missing = next((i for i in range(total) if i not in records), total)
+        if ran.signal:
+            how = f"killed by signal {_signal_name(ran.signal)}"
+        elif ran.exit_code and ran.exit_code > 128:
+            how = f"killed by signal {_signal_name(ran.exit_code - 128)}"
+        else:
+            how = f"exited with status {ran.exit_code}"
+        where = f"before case {missing} reported" if missing < total else "before the test driver finished"
+        stderr = _tail(ran.stderr)
+        return verdict("runtime_error", f"{how} {where}" + (f": {stderr}" if stderr else ""))
+    if ran.exit_code != 0:
+        return verdict("runtime_error", f"all cases reported, but the program exited with status {ran.exit_code}")
+    return verdict("passed", "")
+
+
+def _error_outcome(runtime: Runtime, message: str) -> str:
+    for outcome in ("memory_limit", "timeout", "output_limit"):
+        if any(pattern in message for pattern in runtime.error_patterns.get(outcome, ())):
+            return outcome
+    return "runtime_error"
+
+
+def _signal_name(number: int) -> str:
+    try:
+        return signal.Signals(number).name
+    except ValueError:
+        return str(number)
+
+
+def _tail(text: str) -> str:
+    text = text.strip()
+    return text[-DETAIL_CHARS:] if text else ""
+
+
+def _clip(text: str) -> str:
+    return text if len(text) <= DETAIL_CHARS else text[: DETAIL_CHARS - 3] + "..."

@@ -1,0 +1,174 @@
+"""Running one child process under limits: rlimits, a cgroup, a wall clock and output caps.
+
+Shared by every backend that starts local processes (bubblewrap and the bare baseline).
+"""
+
+from __future__ import annotations
+
+import os
+import resource
+import selectors
+import signal
+import subprocess
+import time
+
+from .base import Limits, StepResult
+from .cgroups import Cgroup, CgroupFactory
+
+# Bytes of stdout/stderr kept for diagnostics; the output limit counts everything produced.
+KEEP_BYTES = 8192
+
+
+def run_limited(
+    argv: list[str],
+    *,
+    cwd: str,
+    env: dict[str, str],
+    limits: Limits,
+    cgroups: CgroupFactory | None,
+    user: int | None = None,
+    memory_rlimit: bool = True,
+) -> StepResult:
+    """Run ``argv`` to completion or until a limit is hit, and say which limit ended it."""
+    group: Cgroup | None = None
+    memory_bytes = limits.memory_mb * 1024 * 1024
+    if cgroups is not None:
+        try:
+            group = cgroups.create(memory_bytes, limits.max_processes)
+        except OSError as exc:
+            return StepResult(exit_code=None, infra_error=f"cannot create cgroup: {exc}")
+    preexec = _make_preexec(limits, group, user, use_as_limit=group is None and memory_rlimit)
+    started = time.monotonic()
+    try:
+        proc = subprocess.Popen(
+            argv,
+            cwd=cwd,
+            env=env,
+            stdin=subprocess.DEVNULL,
+            stdout=subprocess.PIPE,
+            stderr=subprocess.PIPE,
+            start_new_session=True,
+            preexec_fn=preexec,
+            close_fds=True,
+        )
+    except OSError as exc:
+        if group:
+            group.remove()
+        return StepResult(exit_code=None, infra_error=f"cannot start {argv[0]}: {exc}")
+    try:
+        out, err, timed_out, flooded = _collect(proc, limits, started)
+        wall = time.monotonic() - started
+        returncode = proc.returncode
+        result = StepResult(
+            exit_code=returncode if returncode >= 0 else None,
+            signal=-returncode if returncode < 0 else None,
+            wall_seconds=round(wall, 4),
+            stdout=_tail(out),
+            stderr=_tail(err),
+            timed_out=timed_out,
+            output_exceeded=flooded,
+        )
+        if returncode == -signal.SIGXCPU or (returncode == -signal.SIGKILL and _cpu_exhausted(limits, wall)):
+            result.timed_out = True
+        if returncode == -signal.SIGXFSZ:
+            result.file_size_exceeded = True
+        if group is not None:
+            result.extra["peak_memory_mb"] = round(group.peak_bytes() / 2**20, 1)
+            if group.oom_killed() and not timed_out:
+                result.memory_exceeded = True
+        return result
+    finally:
+        _kill_group(proc)
+        if group:
+            group.remove()
+
+
+def _collect(proc: subprocess.Popen, limits: Limits, started: float):
+    """Read both pipes until EOF, the wall-clock deadline, or the output cap."""
+    deadline = started + limits.wall_seconds
+    cap = limits.max_output_kb * 1024
+    buffers = {proc.stdout: bytearray(), proc.stderr: bytearray()}
+    total = 0
+    timed_out = flooded = False
+    with selectors.DefaultSelector() as selector:
+        for stream in buffers:
+            selector.register(stream, selectors.EVENT_READ)
+        while selector.get_map():
+            remaining = deadline - time.monotonic()
+            if remaining <= 0:
+                timed_out = True
+                break
+            for key, _ in selector.select(timeout=min(remaining, 0.5)):
+                chunk = os.read(key.fd, 65536)
+                if not chunk:
+                    selector.unregister(key.fileobj)
+                    continue
+                total += len(chunk)
+                buffer = buffers[key.fileobj]
+                buffer += chunk
+                if len(buffer) > 2 * KEEP_BYTES:
+                    del buffer[: len(buffer) - KEEP_BYTES]
+                if total > cap:
+                    flooded = True
+                    break
+            if flooded:
+                break
+    if timed_out or flooded:
+        _kill_group(proc)
+    try:
+        proc.wait(timeout=max(1.0, deadline - time.monotonic()))
+    except subprocess.TimeoutExpired:
+        timed_out = True
+        _kill_group(proc)
+        proc.wait()
+    for stream in buffers:
+        stream.close()
+    return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded
+
+
+def _cpu_exhausted(limits: Limits, wall: float) -> bool:
+    # The kernel sends SIGKILL once the hard RLIMIT_CPU (soft + 1 s) is passed.
+    return wall >= limits.cpu_seconds
+
+
+def _kill_group(proc: subprocess.Popen) -> None:
+    try:
+        os.killpg(proc.pid, signal.SIGKILL)
+    except (ProcessLookupError, PermissionError):
+        pass
+
+
+def _tail(data: bytes) -> str:
+    return data[-KEEP_BYTES:].decode("utf-8", errors="replace")
+
+
+def _make_preexec(limits: Limits, group: Cgroup | None, user: int | None, use_as_limit: bool):
+    """Runs in the child between fork and exec: join the cgroup (while still privileged), set
+    rlimits, then drop to ``user``. Kept to plain system calls, since it runs in a forked copy
+    of a multi-threaded process."""
+    procs_files = group.procs_files if group else ()
+    limit_processes = group is None or len(group.dirs) < 2 and group.version == 1
+    cpu = max(1, int(limits.cpu_seconds + 0.999))
+    fsize = limits.max_file_mb * 1024 * 1024
+    memory = limits.memory_mb * 1024 * 1024
+
+    def preexec() -> None:
+        for path in procs_files:
+            fd = os.open(path, os.O_WRONLY)
+            try:
+                os.write(fd, b"0")
+            finally:
+                os.close(fd)
+        resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
+        resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
+        resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
+        if use_as_limit:
+            resource.setrlimit(resource.RLIMIT_AS, (memory, memory))
+        if limit_processes:
+            resource.setrlimit(resource.RLIMIT_NPROC, (limits.max_processes, limits.max_processes))
+        if user is not None:
+            os.setgroups([])
+            os.setgid(user)
+            os.setuid(user)
+
+    return preexec
