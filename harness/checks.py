@@ -1,13 +1,15 @@
-"""Self-checks of data: every reference solution of a problem set must pass all its cases."""
+"""Self-checks of data: reference solutions must pass, deliberately wrong ones must not."""
 
 from __future__ import annotations
 
 import concurrent.futures as futures
 
+import yaml
+
 from .completions import Sample
 from .execution import Executor
 from .problems import ProblemSet
-from .runtimes import Runtime
+from .runtimes import Runtime, indent_lines
 from .sandbox import Sandbox
 
 
@@ -29,3 +31,51 @@ def check_references(problem_set: ProblemSet, runtimes: dict[str, Runtime], sand
             results.append({"problem": sample.problem, "language": sample.language, "outcome": verdict.outcome,
                             "detail": verdict.detail, "seconds": verdict.seconds})
     return sorted(results, key=lambda r: (r["problem"], r["language"]))
+
+
+CONFORMANCE_SET = "conformance"
+CHECKS_FILE = "checks.yaml"
+
+
+def load_wrong_candidates(runtime: Runtime) -> list[dict]:
+    """The runtime's ``checks.yaml``: named wrong completions with the verdict each must get."""
+    path = runtime.path / CHECKS_FILE
+    if not path.is_file():
+        return []
+    entries = yaml.safe_load(path.read_text(encoding="utf-8")) or []
+    for i, entry in enumerate(entries):
+        if not isinstance(entry, dict) or not all(isinstance(entry.get(k), str)
+                                                  for k in ("name", "problem", "expect", "completion")):
+            raise ValueError(f"{path}: entry {i} needs string fields name, problem, expect, completion")
+    return entries
+
+
+def check_runtime(runtime: Runtime, problem_set: ProblemSet, sandbox: Sandbox, jobs: int,
+                  limit_overrides: dict | None = None) -> list[dict]:
+    """Run the conformance references (each must pass) and the runtime's wrong candidates (each
+    must get its stated verdict). Returns one row per check with ``ok``."""
+    executor = Executor(sandbox, problem_set, {runtime.name: runtime}, mode="continue",
+                        limit_overrides=limit_overrides)
+    jobs_list: list[tuple[str, str, Sample]] = []
+    rows: list[dict] = []
+    for problem in problem_set.problems.values():
+        if runtime.name not in problem.reference:
+            rows.append({"check": f"reference {problem.id}", "expect": "passed", "outcome": "missing",
+                         "detail": f"no {runtime.name} reference", "ok": False})
+            continue
+        sample = Sample(problem.id, runtime.name, 0, runtime.reference_completion(problem), "reference", 0)
+        jobs_list.append((f"reference {problem.id}", "passed", sample))
+    for entry in load_wrong_candidates(runtime):
+        if entry["problem"] not in problem_set.problems:
+            rows.append({"check": entry["name"], "expect": entry["expect"], "outcome": "missing",
+                         "detail": f"unknown problem {entry['problem']!r}", "ok": False})
+            continue
+        completion = indent_lines(entry["completion"], runtime.reference_indent) + "\n"
+        jobs_list.append((entry["name"], entry["expect"], Sample(entry["problem"], runtime.name, 0, completion,
+                                                                 CHECKS_FILE, 0)))
+    with futures.ThreadPoolExecutor(max_workers=jobs) as pool:
+        verdicts = pool.map(executor.execute, [sample for _, _, sample in jobs_list])
+        for (name, expect, sample), verdict in zip(jobs_list, verdicts):
+            rows.append({"check": name, "problem": sample.problem, "expect": expect, "outcome": verdict.outcome,
+                         "detail": verdict.detail, "seconds": verdict.seconds, "ok": verdict.outcome == expect})
+    return rows

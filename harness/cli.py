@@ -300,5 +300,45 @@ def runtimes_list(
     typer.echo(render(["runtime", "language", "toolchain", "folder"], table, align="llll"))
 
 
+@runtimes_app.command("check")
+def runtimes_check(
+    lang: List[str] = typer.Argument(..., help="Runtime name(s) to check."),
+    jobs: int = typer.Option(2, "--jobs", "-j", min=1),
+    sandbox: str = typer.Option("bubblewrap", "--sandbox"),
+    runtimes_dir: Optional[List[Path]] = RuntimesDir,
+    as_json: bool = typer.Option(False, "--json"),
+) -> None:
+    """Run the conformance set's references and the runtime's deliberately wrong candidates."""
+    from .checks import CONFORMANCE_SET, check_runtime
+
+    problem_set = _load_set(CONFORMANCE_SET)
+    runtimes = _load_runtimes(lang, runtimes_dir)
+    box = _make_sandbox(sandbox)
+    report_rows = {}
+    try:
+        for name, runtime in runtimes.items():
+            try:
+                report_rows[name] = check_runtime(runtime, problem_set, box, jobs, {"wall_seconds": 5, "cpu_seconds": 5})
+            except ValueError as exc:
+                fail(str(exc))
+    finally:
+        box.close()
+    failed = sum(not r["ok"] for rows in report_rows.values() for r in rows)
+    if as_json:
+        typer.echo(json.dumps({"results": report_rows, "failed": failed}, indent=2))
+    else:
+        colour = use_colour()
+        for name, rows in report_rows.items():
+            for r in rows:
+                mark = paint("ok  ", "32", colour) if r["ok"] else paint("FAIL", "31", colour)
+                line = f"{mark} {name}: {r['check']} -> {r['outcome']}"
+                if not r["ok"]:
+                    line += f" (expected {r['expect']}): {r['detail']}"
+                typer.echo(line)
+            typer.echo(f"{name}: {sum(r['ok'] for r in rows)}/{len(rows)} checks passed")
+    if failed:
+        raise typer.Exit(1)
+
+
 def main() -> None:
     app()

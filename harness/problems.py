@@ -92,6 +92,13 @@ def load_problem_set(name_or_path: str) -> ProblemSet:
         hasher.update(file.name.encode() + b"\0" + file.read_bytes() + b"\0")
         problem = parse_problem(_read_yaml(file), file)
         problems[problem.id] = problem
+    for language, problem_id, file in _sidecar_references(path):
+        hasher.update(str(file.relative_to(path)).encode() + b"\0" + file.read_bytes() + b"\0")
+        if problem_id not in problems:
+            raise ProblemError(f"{file}: reference for unknown problem {problem_id!r}")
+        if language in problems[problem_id].reference:
+            raise ProblemError(f"{file}: problem {problem_id!r} already has reference.{language} in its YAML file")
+        problems[problem_id].reference[language] = file.read_text(encoding="utf-8")
     if not problems:
         raise ProblemError(f"{path}: no problem files (*.yaml) found")
     return ProblemSet(
@@ -101,6 +108,17 @@ def load_problem_set(name_or_path: str) -> ProblemSet:
         problems=problems,
         digest=hasher.hexdigest(),
     )
+
+
+def _sidecar_references(path: Path):
+    """References kept as source files, ``references/<language>/<problem id>.<ext>``: easier to
+    write and review in a language's own syntax than inside YAML."""
+    root = path / "references"
+    if not root.is_dir():
+        return
+    for language_dir in sorted(p for p in root.iterdir() if p.is_dir()):
+        for file in sorted(p for p in language_dir.iterdir() if p.is_file()):
+            yield language_dir.name, file.stem, file
 
 
 def _read_yaml(file: Path):
