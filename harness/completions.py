@@ -54,7 +54,8 @@ def read_dumps(
     max_completion_bytes: int = MAX_COMPLETION_BYTES,
 ) -> Iterator[Sample | Reject]:
     """Yield one Sample or Reject per line, in file order. A row without ``sample`` takes the
-    next index of its (problem, language) pair; a key seen before is rejected as a duplicate."""
+    index after the highest seen so far for its (problem, language) pair; a key seen before is
+    rejected as a duplicate."""
     seen: set[int] = set()
     next_index: dict[tuple[str, str], int] = {}
     for path in paths:

@@ -22,6 +22,7 @@ NOBODY = 65534
 BASE_RO_BINDS = ("/usr", "/etc/ld.so.cache", "/etc/alternatives", "/etc/localtime")
 TOP_LEVEL_LINKS = ("/bin", "/lib", "/lib64", "/lib32", "/sbin")
 WORK_DIR = "/work"
+STATUS_FD = "{status-fd}"
 
 
 class LocalWorkspace:
@@ -62,7 +63,8 @@ class BubblewrapWorkspace(LocalWorkspace):
         self.needs = needs
 
     def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:
-        command = self.sandbox.bwrap_argv(self.path, self.needs, env) + ["--"] + argv
+        command = self.sandbox.bwrap_argv(self.path, self.needs, env)
+        command += ["--json-status-fd", STATUS_FD, "--"] + argv
         result = run_limited(
             command,
             cwd=str(self.path),
@@ -70,9 +72,13 @@ class BubblewrapWorkspace(LocalWorkspace):
             limits=limits,
             cgroups=self.sandbox.cgroups,
             user=self.sandbox.run_as,
+            status_fd_placeholder=STATUS_FD,
         )
-        if result.exit_code == 1 and result.stderr.startswith("bwrap:"):
-            result.infra_error = f"bubblewrap failed: {result.stderr.strip()[:300]}"
+        # bubblewrap reports the child's pid once the sandbox is up; without it, the sandbox
+        # itself failed and the candidate never ran.
+        if "child-pid" not in result.extra.pop("wrapper_status", "") and not result.timed_out:
+            reason = result.stderr.strip()[-300:] or f"exit status {result.exit_code}"
+            result.infra_error = f"bubblewrap could not start the sandbox: {reason}"
         return result
 
 
@@ -147,6 +153,7 @@ class BubblewrapSandbox:
                 argv += ["--ro-bind", link, link]
         for path in BASE_RO_BINDS + tuple(needs.ro_binds):
             argv += ["--ro-bind-try", path, path]
+        argv += ["--remount-ro", "/"]  # the sandbox's own root too: only /work and /tmp take writes
         merged = {"HOME": WORK_DIR, "TMPDIR": "/tmp", "LANG": "C.UTF-8", "PATH": "/usr/local/bin:/usr/bin:/bin"}
         merged.update(dict(needs.env))
         merged.update(env)

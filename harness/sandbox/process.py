@@ -28,8 +28,14 @@ def run_limited(
     cgroups: CgroupFactory | None,
     user: int | None = None,
     memory_rlimit: bool = True,
+    status_fd_placeholder: str | None = None,
 ) -> StepResult:
-    """Run ``argv`` to completion or until a limit is hit, and say which limit ended it."""
+    """Run ``argv`` to completion or until a limit is hit, and say which limit ended it.
+
+    With ``status_fd_placeholder``, that argument of ``argv`` is replaced by the number of a
+    pipe the wrapper (bubblewrap) reports its own status on; the text lands in
+    ``extra["wrapper_status"]``, so a wrapper failure is told apart from the candidate's.
+    """
     group: Cgroup | None = None
     memory_bytes = limits.memory_mb * 1024 * 1024
     if cgroups is not None:
@@ -38,6 +44,10 @@ def run_limited(
         except OSError as exc:
             return StepResult(exit_code=None, infra_error=f"cannot create cgroup: {exc}")
     preexec = _make_preexec(limits, group, user, use_as_limit=group is None and memory_rlimit)
+    status_read = status_write = None
+    if status_fd_placeholder is not None:
+        status_read, status_write = os.pipe()
+        argv = [str(status_write) if arg == status_fd_placeholder else arg for arg in argv]
     started = time.monotonic()
     try:
         proc = subprocess.Popen(
@@ -50,11 +60,16 @@ def run_limited(
             start_new_session=True,
             preexec_fn=preexec,
             close_fds=True,
+            pass_fds=(status_write,) if status_write is not None else (),
         )
     except OSError as exc:
         if group:
             group.remove()
+        _close(status_read, status_write)
         return StepResult(exit_code=None, infra_error=f"cannot start {argv[0]}: {exc}")
+    if status_write is not None:
+        os.close(status_write)
+        status_write = None
     try:
         out, err, timed_out, flooded = _collect(proc, limits, started)
         wall = time.monotonic() - started
@@ -72,6 +87,8 @@ def run_limited(
             result.timed_out = True
         if returncode == -signal.SIGXFSZ:
             result.file_size_exceeded = True
+        if status_read is not None:
+            result.extra["wrapper_status"] = _read_all(status_read)
         if group is not None:
             result.extra["peak_memory_mb"] = round(group.peak_bytes() / 2**20, 1)
             if group.oom_killed() and not timed_out:
@@ -79,8 +96,32 @@ def run_limited(
         return result
     finally:
         _kill_group(proc)
+        _close(status_read, status_write)
         if group:
             group.remove()
+
+
+def _read_all(fd: int) -> str:
+    chunks = []
+    os.set_blocking(fd, False)
+    while True:
+        try:
+            chunk = os.read(fd, 65536)
+        except BlockingIOError:
+            break
+        if not chunk:
+            break
+        chunks.append(chunk)
+    return b"".join(chunks).decode("utf-8", errors="replace")
+
+
+def _close(*fds) -> None:
+    for fd in fds:
+        if fd is not None:
+            try:
+                os.close(fd)
+            except OSError:
+                pass
 
 
 def _collect(proc: subprocess.Popen, limits: Limits, started: float):
