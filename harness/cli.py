@@ -300,6 +300,25 @@ def runtimes_list(
     typer.echo(render(["runtime", "language", "toolchain", "folder"], table, align="llll"))
 
 
+@runtimes_app.command("new")
+def runtimes_new(
+    name: str = typer.Argument(..., help="The new runtime's name (the language), e.g. kotlin."),
+    into: Optional[Path] = typer.Option(None, "--into", help="Parent folder (default: the bundled runtimes/). "
+                                        "Use a folder of your own with --runtimes-dir or ASSAY_RUNTIMES_PATH."),
+) -> None:
+    """Write a commented skeleton runtime folder to fill in."""
+    from .locations import bundled_dir
+    from .runtimes import write_skeleton
+
+    target = (into or bundled_dir("runtimes")) / name
+    try:
+        write_skeleton(name, target)
+    except (ValueError, FileExistsError) as exc:
+        fail(str(exc))
+    typer.echo(f"wrote {target}: fill in runtime.yaml and the templates (see docs/runtime-format.md), "
+               f"then run 'assay runtimes check {name}'")
+
+
 @runtimes_app.command("check")
 def runtimes_check(
     lang: List[str] = typer.Argument(..., help="Runtime name(s) to check."),
