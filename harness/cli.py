@@ -120,6 +120,10 @@ def score(
                              "sequences; whole: the completion is the whole function (fences stripped)."),
     sandbox: str = typer.Option("bubblewrap", "--sandbox", help=f"Sandbox backend: {', '.join(BACKENDS)}."),
     label: Optional[str] = typer.Option(None, "--label", help="Checkpoint label recorded in the manifest."),
+    repeat: int = typer.Option(1, "--repeat", min=1, help="Run each candidate N times; disagreeing "
+                               "verdicts mark it flaky (the first run's verdict is recorded)."),
+    cache: Optional[Path] = typer.Option(None, "--cache", help="Folder of verdicts shared across runs and "
+                                         "checkpoints: identical programs are executed once."),
     runtimes_dir: Optional[List[Path]] = RuntimesDir,
     as_json: bool = typer.Option(False, "--json", help="Print the summary as JSON."),
     quiet: bool = typer.Option(False, "--quiet", "-q", help="No progress line."),
@@ -142,7 +146,8 @@ def score(
     box = _make_sandbox(sandbox)
     out = out or Path("results") / dumps[0].stem
     options = ScoreOptions(dumps=list(dumps), out=out, jobs=jobs, mode=mode, ks=ks,
-                           limit_overrides=_limits(timeout, memory), progress=not quiet, label=label)
+                           limit_overrides=_limits(timeout, memory), progress=not quiet, label=label,
+                           repeat=repeat, cache_dir=cache)
     try:
         outcome = run_score(options, problem_set, runtimes, box)
     except (StoreBusy, StoreMismatch) as exc:
@@ -157,8 +162,8 @@ def score(
         typer.echo(f"interrupted: {outcome.executed} candidate(s) judged this time. Run the same command "
                    "again to resume where it stopped.", err=True)
         raise typer.Exit(130)
-    typer.echo(f"judged {outcome.executed}, resumed {outcome.resumed}, rejected {outcome.rejected}; "
-               f"results in {out}", err=True)
+    typer.echo(f"judged {outcome.executed}, shared {outcome.shared}, resumed {outcome.resumed}, "
+               f"rejected {outcome.rejected}; results in {out}", err=True)
 
 
 def _languages_in_use(dumps: list[Path], extra) -> list[str]:
@@ -176,22 +181,6 @@ def _languages_in_use(dumps: list[Path], extra) -> list[str]:
                 if language in known:
                     wanted.add(language)
     return sorted(wanted)
-
-
-@app.command()
-def report(
-    out: Path = typer.Argument(..., help="A folder written by 'assay score'."),
-    as_json: bool = typer.Option(False, "--json", help="Print summary.json's content."),
-) -> None:
-    """Print the pass@k table of a scored run."""
-    path = out / SUMMARY
-    if not path.is_file():
-        fail(f"{path}: no summary; run 'assay score ... --out {out}' first")
-    summary = json.loads(path.read_text(encoding="utf-8"))
-    if as_json:
-        typer.echo(json.dumps(summary, indent=2))
-    else:
-        typer.echo(pass_table(summary, use_colour(), title=str(out)))
 
 
 @app.command()
@@ -357,6 +346,11 @@ def runtimes_check(
             typer.echo(f"{name}: {sum(r['ok'] for r in rows)}/{len(rows)} checks passed")
     if failed:
         raise typer.Exit(1)
+
+
+from .cli_analysis import register  # noqa: E402  (analysis commands: report, compare, trend)
+
+register(app)
 
 
 def main() -> None:

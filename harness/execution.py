@@ -6,6 +6,7 @@ nonce, and a final ``done`` record; exit status 0 alone never makes a pass.
 
 from __future__ import annotations
 
+import hashlib
 import json
 import secrets
 import signal
@@ -62,8 +63,14 @@ class Executor:
         mode: str = "continue",
         limit_overrides: dict | None = None,
         compile_limit_overrides: dict | None = None,
+        repeat: int = 1,
+        infra_retries: int = 3,
+        retry_backoff: float = 0.5,
     ):
         self.sandbox = sandbox
+        self.repeat = repeat
+        self.infra_retries = infra_retries
+        self.retry_backoff = retry_backoff
         self.problems = problems
         self.runtimes = runtimes
         self.mode = mode
@@ -87,14 +94,51 @@ class Executor:
             )
         return compile_limits, runtime.step_limits(base, runtime.run, self.limit_overrides)
 
-    def program(self, sample: Sample, nonce: str, results_file: str) -> str:
-        runtime = self.runtimes[sample.language]
-        problem = self.problems.problems[sample.problem]
+    def code(self, sample: Sample) -> str:
+        """The candidate's source before the driver: what the model's text amounts to."""
         prompt, preamble = self._prompt(sample.problem, sample.language)
-        code = assemble_code(self.mode, prompt, preamble, sample.completion, runtime.stop_sequences)
-        return runtime.render_program(problem, code, results_file, nonce)
+        return assemble_code(self.mode, prompt, preamble, sample.completion,
+                             self.runtimes[sample.language].stop_sequences)
+
+    def program(self, sample: Sample, nonce: str, results_file: str) -> str:
+        problem = self.problems.problems[sample.problem]
+        return self.runtimes[sample.language].render_program(problem, self.code(sample), results_file, nonce)
+
+    def program_key(self, sample: Sample) -> str:
+        """Content hash of everything that decides a verdict: runtime and problem set contents,
+        the problem, the candidate's code after stop sequences, limits and repeats. Samples
+        with equal keys are the same experiment, so one execution serves them all."""
+        runtime = self.runtimes[sample.language]
+        compile_limits, run_limits = self.limits_for(runtime)
+        identity = json.dumps([runtime.digest, self.problems.digest, sample.problem, self.repeat,
+                               compile_limits.as_dict() if compile_limits else None, run_limits.as_dict()])
+        hasher = hashlib.sha256(identity.encode())
+        # Trailing whitespace is the one edit that changes no program in any language.
+        hasher.update(b"\0" + self.code(sample).rstrip().encode("utf-8"))
+        return hasher.hexdigest()
+
+    def judge_sample(self, sample: Sample) -> Verdict:
+        """The verdict to record: infra errors retried with backoff; with ``repeat`` > 1 the
+        candidate runs that many times and disagreeing outcomes mark it flaky."""
+        verdicts = [self._execute_with_retries(sample) for _ in range(self.repeat)]
+        verdict = verdicts[0]
+        if self.repeat > 1:
+            outcomes = [v.outcome for v in verdicts]
+            verdict.extra["repeat_outcomes"] = outcomes
+            verdict.extra["flaky"] = len(set(outcomes)) > 1
+        return verdict
+
+    def _execute_with_retries(self, sample: Sample) -> Verdict:
+        verdict = self.execute(sample)
+        for attempt in range(self.infra_retries):
+            if verdict.outcome != "infra_error":
+                break
+            time.sleep(self.retry_backoff * 2**attempt)
+            verdict = self.execute(sample)
+        return verdict
 
     def execute(self, sample: Sample) -> Verdict:
+        """One execution of one sample, no retries."""
         started = time.monotonic()
         runtime = self.runtimes[sample.language]
         problem = self.problems.problems[sample.problem]

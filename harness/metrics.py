@@ -54,9 +54,11 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
     """
     samples: dict[tuple[str, str], list[int]] = defaultdict(lambda: [0, 0])
     outcomes: dict[str, dict[str, int]] = defaultdict(lambda: dict.fromkeys(OUTCOMES, 0))
+    flaky: dict[str, int] = defaultdict(int)
     for row in rows:
         language = row["language"]
         outcomes[language][row["outcome"]] += 1
+        flaky[language] += bool(row.get("flaky"))
         if row["outcome"] == "infra_error":
             continue
         counts = samples[(row["problem"], language)]
@@ -88,6 +90,7 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
         "min_samples_per_problem": min_samples,
         "samples": sum(n for n, _ in samples.values()),
         "infra_errors": sum(o["infra_error"] for o in outcomes.values()),
+        "flaky": {lang: flaky[lang] for lang in languages if flaky[lang]},
         "per_problem": {
             f"{problem}/{language}": {"n": samples[(problem, language)][0], "c": samples[(problem, language)][1],
                                       "pass_at_k": values}

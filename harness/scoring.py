@@ -6,7 +6,6 @@ always give the same sample keys, so rerunning the command executes only what is
 
 from __future__ import annotations
 
-import concurrent.futures as futures
 import datetime as dt
 import hashlib
 import platform
@@ -15,6 +14,7 @@ from pathlib import Path
 
 from . import __version__
 from .completions import MAX_COMPLETION_BYTES, Reject, key_hash, read_dumps
+from .engines import LocalEngine
 from .execution import Executor, Verdict
 from .metrics import read_rows, summarize
 from .problems import ProblemSet
@@ -22,6 +22,7 @@ from .progress import Progress
 from .runtimes import Runtime
 from .sandbox import Sandbox
 from .store import MANIFEST, SUMMARY, ResultStore, StoreMismatch
+from .verdict_cache import VerdictCache
 
 
 @dataclass
@@ -35,6 +36,8 @@ class ScoreOptions:
     max_completion_bytes: int = MAX_COMPLETION_BYTES
     progress: bool = True
     label: str | None = None
+    repeat: int = 1
+    cache_dir: Path | None = None
 
 
 @dataclass
@@ -44,6 +47,7 @@ class ScoreOutcome:
     resumed: int
     rejected: int
     interrupted: bool
+    shared: int = 0
 
 
 def now_iso() -> str:
@@ -88,11 +92,12 @@ def build_manifest(options: ScoreOptions, problems: ProblemSet, runtimes: dict[s
         "runtimes": runtime_info,
         "sandbox": sandbox.describe(),
         "limit_overrides": options.limit_overrides,
+        "repeat": options.repeat,
         "host": {"python": platform.python_version(), "platform": platform.platform()},
     }
 
 
-IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "limit_overrides")
+IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "limit_overrides", "repeat")
 
 
 def check_resumable(previous: dict | None, manifest: dict, out: Path) -> None:
@@ -115,69 +120,90 @@ def check_resumable(previous: dict | None, manifest: dict, out: Path) -> None:
         )
 
 
-def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runtime], sandbox: Sandbox) -> ScoreOutcome:
-    executor = Executor(sandbox, problems, runtimes, options.mode, options.limit_overrides)
+def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runtime], sandbox: Sandbox,
+          engine_factory=None) -> ScoreOutcome:
+    """Score the dumps into ``options.out``. ``engine_factory(executor)`` picks where candidates
+    run (default: a local thread pool of ``options.jobs`` workers)."""
+    executor = Executor(sandbox, problems, runtimes, options.mode, options.limit_overrides, repeat=options.repeat)
+    engine = engine_factory(executor) if engine_factory else LocalEngine(executor, options.jobs)
+    cache = VerdictCache(options.cache_dir)
     manifest = build_manifest(options, problems, runtimes, sandbox, executor)
+    manifest["engine"] = engine.describe()
     total = sum(count_lines(p) for p in options.dumps)
-    with ResultStore(options.out) as store:
-        previous = store.read_manifest()
-        check_resumable(previous, manifest, options.out)
-        done, retried = store.recover()
-        manifest["started_at"] = previous["started_at"] if previous else now_iso()
-        manifest["resumed_at"] = (previous.get("resumed_at", []) + [now_iso()]) if previous else []
-        manifest["finished_at"] = None
-        store.write_json(MANIFEST, manifest)
-        store.start_writing()
+    counts = {"executed": 0, "resumed": 0, "rejected": 0, "shared": 0}
+    interrupted = False
+    try:
+        with ResultStore(options.out) as store:
+            previous = store.read_manifest()
+            check_resumable(previous, manifest, options.out)
+            done, retried = store.recover()
+            manifest["started_at"] = previous["started_at"] if previous else now_iso()
+            manifest["resumed_at"] = (previous.get("resumed_at", []) + [now_iso()]) if previous else []
+            manifest["finished_at"] = None
+            store.write_json(MANIFEST, manifest)
+            store.start_writing()
+            progress = Progress(total, label=options.label or "scoring", enabled=options.progress)
+            waiting: dict[str, list] = {}  # program key -> samples sharing the execution in flight
 
-        progress = Progress(total, label=options.label or "scoring", enabled=options.progress)
-        counts = {"executed": 0, "resumed": 0, "rejected": 0}
-        interrupted = False
-        pool = futures.ThreadPoolExecutor(max_workers=options.jobs, thread_name_prefix="assay-worker")
-        pending: dict[futures.Future, object] = {}
-
-        def collect(block: bool) -> None:
-            finished, _ = futures.wait(pending, timeout=None if block else 0, return_when=futures.FIRST_COMPLETED)
-            for future in finished:
-                sample = pending.pop(future)
-                verdict: Verdict = future.result()
-                store.append(verdict.row(sample))
-                counts["executed"] += 1
+            def record(sample, verdict: Verdict, shared: bool) -> None:
+                row = verdict.row(sample)
+                if shared:
+                    row["shared"] = True
+                    counts["shared"] += 1
+                store.append(row)
+                counts["executed"] += not shared
                 progress.advance(executed=True, passed=verdict.outcome == "passed")
 
-        try:
-            items = read_dumps(options.dumps, set(problems.problems), set(runtimes), options.max_completion_bytes)
-            for item in items:
-                if isinstance(item, Reject):
-                    store.reject(item)
-                    counts["rejected"] += 1
-                    progress.advance()
-                    continue
-                if key_hash(*item.key) in done:
-                    counts["resumed"] += 1
-                    progress.advance()
-                    continue
-                while len(pending) >= options.jobs * 2:
-                    collect(block=True)
-                pending[pool.submit(executor.execute, item)] = item
-                collect(block=False)
-            while pending:
-                collect(block=True)
-        except KeyboardInterrupt:
-            interrupted = True
-            for future in list(pending):
-                if future.cancel():
-                    pending.pop(future)
-            while pending:  # let running candidates finish (bounded by their limits) and keep them
-                collect(block=True)
-        finally:
-            pool.shutdown(wait=True, cancel_futures=True)
-            progress.finish()
+            def jobs():
+                for item in read_dumps(options.dumps, set(problems.problems), set(runtimes),
+                                       options.max_completion_bytes):
+                    if isinstance(item, Reject):
+                        store.reject(item)
+                        counts["rejected"] += 1
+                        progress.advance()
+                        continue
+                    if key_hash(*item.key) in done:
+                        counts["resumed"] += 1
+                        progress.advance()
+                        continue
+                    key = executor.program_key(item)
+                    if key in waiting:
+                        waiting[key].append(item)
+                        continue
+                    cached = cache.get(key)
+                    if cached is not None:
+                        record(item, cached, shared=True)
+                        continue
+                    waiting[key] = []
+                    yield key, item
 
-        summary = summarize(read_rows(store.executions_path), options.ks)
-        summary["rejected"] = counts["rejected"]
-        summary["retried_infra_errors"] = retried
-        store.write_json(SUMMARY, summary)
-        if not interrupted:
-            manifest["finished_at"] = now_iso()
-            store.write_json(MANIFEST, manifest)
-    return ScoreOutcome(summary, counts["executed"], counts["resumed"], counts["rejected"], interrupted)
+            def finish(key: str, sample, verdict: Verdict) -> None:
+                cache.put(key, verdict)
+                record(sample, verdict, shared=False)
+                for other in waiting.pop(key, []):
+                    record(other, verdict, shared=True)
+
+            try:
+                for key, sample, verdict in engine.run(jobs()):
+                    finish(key, sample, verdict)
+            except KeyboardInterrupt:
+                interrupted = True
+                for key, sample, verdict in engine.drain():
+                    finish(key, sample, verdict)
+            finally:
+                progress.finish()
+
+            summary = summarize(read_rows(store.executions_path), options.ks)
+            summary["rejected"] = counts["rejected"]
+            summary["retried_infra_errors"] = retried
+            summary["executions"] = {"run": counts["executed"], "shared": counts["shared"],
+                                     "saved_share": counts["shared"] / max(1, counts["executed"] + counts["shared"])}
+            store.write_json(SUMMARY, summary)
+            if not interrupted:
+                manifest["finished_at"] = now_iso()
+                store.write_json(MANIFEST, manifest)
+    finally:
+        engine.close()
+        cache.close()
+    return ScoreOutcome(summary, counts["executed"], counts["resumed"], counts["rejected"], interrupted,
+                        counts["shared"])

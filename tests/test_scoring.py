@@ -118,7 +118,7 @@ def test_rerunning_a_finished_run_executes_nothing(tmp_path, tiny_set):
     out = tmp_path / "out"
     assay("score", dump, "--set", tiny_set, "--out", out, "-q")
     again = assay("score", dump, "--set", tiny_set, "--out", out, "-q")
-    assert "judged 0, resumed 4" in again.stderr
+    assert "judged 0, shared 0, resumed 4" in again.stderr
 
 
 def test_infra_errors_are_retried_by_the_next_run(tmp_path, tiny_set):
@@ -129,7 +129,7 @@ def test_infra_errors_are_retried_by_the_next_run(tmp_path, tiny_set):
     rows[0]["outcome"] = "infra_error"
     (out / "executions.jsonl").write_text("".join(json.dumps(r) + "\n" for r in rows))
     again = assay("score", dump, "--set", tiny_set, "--out", out, "-q")
-    assert "judged 1, resumed 3" in again.stderr
+    assert "judged 1, shared 0, resumed 3" in again.stderr
     assert sum(r["outcome"] == "infra_error" for r in read_rows(out)) == 0
     assert len(read_rows(out)) == 4
 
@@ -198,3 +198,37 @@ def test_bad_options_give_one_clear_line(tmp_path, tiny_set):
                           (["--sandbox", "chroot"], "unknown sandbox")]:
         done = assay("score", dump, "--out", tmp_path / "o", *args, check=False)
         assert done.returncode == 2 and message in done.stderr and "Traceback" not in done.stderr
+
+
+def test_identical_programs_run_once_and_share_their_verdict(tmp_path, tiny_set):
+    rows = [{"problem": "add_pair", "language": "python", "completion": CANDIDATES["passed"]}] * 5
+    rows += [{"problem": "add_pair", "language": "python", "completion": CANDIDATES["passed"] + "\n\nprint(1)\n"}]
+    out = tmp_path / "out"
+    done = assay("score", write_dump(tmp_path / "a.jsonl", rows), "--set", tiny_set, "--out", out, "-q")
+    assert "judged 1, shared 5" in done.stderr  # the trailing text is cut by a stop sequence
+    saved = read_rows(out)
+    assert len(saved) == 6 and sum(bool(r.get("shared")) for r in saved) == 5
+    assert json.loads((out / "summary.json").read_text())["executions"]["saved_share"] == pytest.approx(5 / 6)
+
+
+def test_a_cache_folder_carries_verdicts_to_the_next_checkpoint(tmp_path, tiny_set):
+    cache = tmp_path / "cache"
+    first = write_dump(tmp_path / "a.jsonl", mixed_rows(4))
+    assay("score", first, "--set", tiny_set, "--out", tmp_path / "a", "-q", "--cache", cache)
+    second = write_dump(tmp_path / "b.jsonl", mixed_rows(4)[::-1])
+    done = assay("score", second, "--set", tiny_set, "--out", tmp_path / "b", "-q", "--cache", cache)
+    assert "judged 0, shared 4" in done.stderr
+    assert verdict_set(tmp_path / "b") == {(p, l, 3 - s, o) for p, l, s, o in verdict_set(tmp_path / "a")}
+
+
+def test_repeat_marks_candidates_whose_verdicts_disagree_as_flaky(tmp_path, tiny_set):
+    # Right or wrong by a coin flip: twelve runs all agreeing has probability 2 / 2**12.
+    flaky = "    import os\n    return a + b if os.urandom(1)[0] % 2 else 0\n"
+    rows = [{"problem": "add_pair", "language": "python", "completion": CANDIDATES["passed"]},
+            {"problem": "add_pair", "language": "python", "completion": flaky}]
+    out = tmp_path / "out"
+    assay("score", write_dump(tmp_path / "a.jsonl", rows), "--set", tiny_set, "--out", out, "-q", "--repeat", "12")
+    saved = {r["sample"]: r for r in read_rows(out)}
+    assert saved[0]["flaky"] is False and saved[0]["repeat_outcomes"] == ["passed"] * 12
+    assert saved[1]["flaky"] is True and set(saved[1]["repeat_outcomes"]) == {"passed", "wrong_answer"}
+    assert json.loads((out / "summary.json").read_text())["flaky"] == {"python": 1}
