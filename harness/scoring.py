@@ -20,6 +20,7 @@ from .metrics import read_rows, summarize
 from .problems import ProblemSet
 from .progress import Progress
 from .runtimes import Runtime
+from .scheduling import interleave
 from .sandbox import Sandbox
 from .store import MANIFEST, SUMMARY, ResultStore, StoreMismatch
 from .verdict_cache import VerdictCache
@@ -183,8 +184,12 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
                 for other in waiting.pop(key, []):
                     record(other, verdict, shared=True)
 
+            def priority(language: str) -> int:
+                return 1 if runtimes[language].compile is not None else 0
+
+            scheduled = interleave(jobs(), group_of=lambda job: job[1].language, priority_of=priority)
             try:
-                for key, sample, verdict in engine.run(jobs()):
+                for key, sample, verdict in engine.run(scheduled):
                     finish(key, sample, verdict)
             except KeyboardInterrupt:
                 interrupted = True
