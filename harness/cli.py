@@ -16,7 +16,7 @@ from .problems import ProblemError, ProblemSet, load_problem_set
 from .report import pass_table
 from .runtimes import RuntimeConfigError, Runtime, available_runtimes, load_runtime
 from .sandbox import BACKENDS, SandboxUnavailable, make_sandbox
-from .store import SUMMARY, StoreBusy, StoreMismatch
+from .store import SUMMARY, StoreBusy, StoreMismatch, StoreWriteError
 from .tables import paint, render, use_colour
 
 app = typer.Typer(add_completion=False, no_args_is_help=True, help=(
@@ -152,6 +152,8 @@ def score(
         outcome = run_score(options, problem_set, runtimes, box)
     except (StoreBusy, StoreMismatch) as exc:
         fail(str(exc))
+    except StoreWriteError as exc:
+        fail(str(exc), code=3)
     finally:
         box.close()
     if as_json:

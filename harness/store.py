@@ -30,6 +30,11 @@ class StoreMismatch(RuntimeError):
     pass
 
 
+class StoreWriteError(RuntimeError):
+    """The results folder cannot take more writes (disk full, I/O error): the machinery's
+    fault, never a candidate's. What was written stays; the same command resumes."""
+
+
 class ResultStore:
     def __init__(self, out_dir: Path):
         self.dir = Path(out_dir)
@@ -53,9 +58,16 @@ class ResultStore:
     def __exit__(self, *exc) -> None:
         for handle in (self._executions, self._rejects):
             if handle:
-                handle.flush()
-                os.fsync(handle.fileno())
-                handle.close()
+                try:
+                    handle.flush()
+                    os.fsync(handle.fileno())
+                except OSError:
+                    pass  # already reported by the failed write; recover() repairs a torn tail
+                finally:
+                    try:
+                        handle.close()
+                    except OSError:
+                        pass
         self._lock.release()
 
     def read_manifest(self) -> dict | None:
@@ -114,9 +126,17 @@ class ResultStore:
         self._rejects = open(self.rejects_path, "w", encoding="utf-8")
 
     def append(self, row: dict) -> None:
-        self._executions.write(json.dumps(row, ensure_ascii=False) + "\n")
-        self._executions.flush()
+        self._write(self._executions, row)
 
     def reject(self, reject: Reject) -> None:
-        self._rejects.write(json.dumps(reject.as_dict(), ensure_ascii=False) + "\n")
-        self._rejects.flush()
+        self._write(self._rejects, reject.as_dict())
+
+    def _write(self, handle, data: dict) -> None:
+        try:
+            handle.write(json.dumps(data, ensure_ascii=False) + "\n")
+            handle.flush()
+        except OSError as exc:
+            raise StoreWriteError(
+                f"cannot write to {handle.name}: {exc.strerror or exc}. Verdicts already written are kept; "
+                "free space (or fix the disk) and run the same command again to resume."
+            ) from None
