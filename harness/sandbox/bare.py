@@ -7,13 +7,12 @@ runtime. It protects nothing: never point it at untrusted code.
 from __future__ import annotations
 
 import contextlib
-import os
 import shutil
 import tempfile
 from pathlib import Path
 
 from .base import Limits, RuntimeSandboxNeeds, StepResult
-from .bubblewrap import LocalWorkspace
+from .bubblewrap import LocalWorkspace, default_work_root
 from .process import run_limited
 
 
@@ -34,10 +33,10 @@ class BareSandbox:
     name = "none"
 
     def __init__(self, work_root: Path | None = None):
-        self.work_root = Path(work_root or tempfile.gettempdir()) / f"assay-bare-{os.getpid()}"
+        self.work_root = Path(tempfile.mkdtemp(prefix="assay-bare-", dir=work_root or default_work_root()))
 
     def check(self) -> None:
-        self.work_root.mkdir(parents=True, exist_ok=True)
+        pass
 
     @contextlib.contextmanager
     def workspace(self, needs: RuntimeSandboxNeeds):

@@ -25,6 +25,15 @@ WORK_DIR = "/work"
 STATUS_FD = "{status-fd}"
 
 
+def default_work_root() -> str:
+    """Work dirs live in RAM (/dev/shm) when possible: pages a candidate writes there are
+    charged to its memory cgroup, so filling the disk is bounded by the memory limit."""
+    shm = "/dev/shm"
+    if os.path.isdir(shm) and os.access(shm, os.W_OK):
+        return shm
+    return tempfile.gettempdir()
+
+
 class LocalWorkspace:
     """A host temp folder for one candidate; subclasses decide how a step is wrapped."""
 
@@ -89,14 +98,14 @@ class BubblewrapSandbox:
         self.bwrap = shutil.which("bwrap")
         self.run_as = NOBODY if os.geteuid() == 0 else None
         self.cgroups = cgroups.detect()
-        self.work_root = Path(work_root or tempfile.gettempdir()) / f"assay-work-{os.getpid()}"
+        # One folder per sandbox object, so two sandboxes in one process never share it.
+        self.work_root = Path(tempfile.mkdtemp(prefix="assay-work-", dir=work_root or default_work_root()))
 
     def check(self) -> None:
         if not self.bwrap:
             raise SandboxUnavailable(
                 "bubblewrap (bwrap) is not installed; on Debian/Ubuntu: apt-get install bubblewrap"
             )
-        self.work_root.mkdir(parents=True, exist_ok=True)
         os.chmod(self.work_root, 0o711)
         probe = run_limited(
             self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}) + ["--", "/bin/true"],

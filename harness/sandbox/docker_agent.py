@@ -1,0 +1,319 @@
+"""The Docker sandbox's in-container supervisor: runs as the container's pid 1.
+
+Why it exists: starting a process with ``docker exec`` costs tens of milliseconds (runc joins
+the namespaces afresh each time), more than a whole Python candidate takes. Instead the backend
+starts this script once per container (``python3 -I -S -c <this file>``) and talks to it over
+the container's attached stdin/stdout, one JSON line per request and per reply; it spawns each
+step with plain fork/exec.
+
+Why it is safe to share a uid with the candidate: as pid 1 of the container's pid namespace it
+cannot be signalled from inside the namespace (the kernel drops SIGKILL/SIGSTOP sent to a
+namespace's init by its members, and every catchable signal is ignored here), and it makes
+itself non-dumpable, so a candidate can neither ptrace it nor open its /proc files (memory,
+fds, environment). After every step it kills whatever the step left running and reports it, so
+the backend can discard the container.
+
+Standard library only and no harness imports: the file is sent as source into the image's
+``python3``.
+"""
+
+import base64
+import ctypes
+import json
+import os
+import resource
+import selectors
+import signal
+import stat
+import subprocess
+import sys
+import time
+
+WORK = "/work"
+SCRATCH = ("/tmp", "/dev/shm")
+KEEP_BYTES = 8192  # output kept for diagnostics, as in harness/sandbox/process.py
+PR_SET_DUMPABLE = 4
+IGNORED = [s for s in (signal.SIGINT, signal.SIGTERM, signal.SIGHUP, signal.SIGQUIT, signal.SIGUSR1,
+                       signal.SIGUSR2, signal.SIGALRM, signal.SIGTSTP, signal.SIGTTIN, signal.SIGTTOU)]
+
+
+def oom_counter_files():
+    """The container's own OOM-kill counter, seen from inside (cgroup v2 or v1)."""
+    found = []
+    try:
+        lines = open("/proc/self/cgroup").read().splitlines()
+    except OSError:
+        lines = []
+    for line in lines:
+        number, controllers, path = line.split(":", 2)
+        if number == "0" and controllers == "":
+            found += ["/sys/fs/cgroup" + path.rstrip("/") + "/memory.events", "/sys/fs/cgroup/memory.events"]
+        elif "memory" in controllers.split(","):
+            found += ["/sys/fs/cgroup/memory/memory.oom_control",
+                      "/sys/fs/cgroup/memory" + path.rstrip("/") + "/memory.oom_control"]
+    return [f for f in found if os.path.isfile(f)]
+
+
+def read_oom_kills(files):
+    for name in files:
+        try:
+            for line in open(name).read().splitlines():
+                key, _, value = line.partition(" ")
+                if key == "oom_kill":
+                    return int(value)
+        except (OSError, ValueError):
+            continue
+    return None
+
+
+def memory_usage():
+    for name in ("/sys/fs/cgroup/memory/memory.usage_in_bytes", "/sys/fs/cgroup/memory.current"):
+        try:
+            return int(open(name).read().split()[0])
+        except (OSError, ValueError, IndexError):
+            continue
+    return None
+
+
+class Supervisor:
+    def __init__(self):
+        self.oom_files = oom_counter_files()
+
+    # --- files -----------------------------------------------------------------------------
+    def path(self, name):
+        if not name or name.startswith("/") or ".." in name.split("/"):
+            raise ValueError("file name must be relative to the work dir: %r" % name)
+        return os.path.join(WORK, name)
+
+    def op_write(self, req):
+        target = self.path(req["name"])
+        os.makedirs(os.path.dirname(target), exist_ok=True)
+        fd = os.open(target, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_NOFOLLOW, 0o644)
+        with os.fdopen(fd, "wb") as handle:
+            handle.write(base64.b64decode(req["data"]))
+        return {}
+
+    def op_read(self, req):
+        try:
+            # O_NOFOLLOW: a link planted by the candidate; O_NONBLOCK: a FIFO must not hang us.
+            fd = os.open(self.path(req["name"]), os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK)
+        except OSError:
+            return {"data": None}
+        with os.fdopen(fd, "rb") as handle:
+            if not stat.S_ISREG(os.fstat(fd).st_mode):
+                return {"data": None}
+            data = handle.read(int(req["max_bytes"]))
+        return {"data": base64.b64encode(data).decode("ascii")}
+
+    # --- steps -----------------------------------------------------------------------------
+    def op_run(self, req):
+        limits = req["limits"]
+        argv, env = req["argv"], req["env"]
+        before = read_oom_kills(self.oom_files)
+        started = time.monotonic()
+        try:
+            proc = subprocess.Popen(
+                argv, cwd=WORK, env=env, stdin=subprocess.DEVNULL, stdout=subprocess.PIPE,
+                stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
+                preexec_fn=step_preexec(limits),
+            )
+        except OSError as exc:
+            return {"spawn_error": "cannot start %s: %s" % (argv[0], exc)}
+        out, err, timed_out, flooded = collect(proc, limits, started)
+        wall = time.monotonic() - started
+        left_running = sweep()
+        after = read_oom_kills(self.oom_files)
+        return {
+            "returncode": proc.returncode,
+            "wall": round(wall, 4),
+            "stdout": base64.b64encode(out[-KEEP_BYTES:]).decode("ascii"),
+            "stderr": base64.b64encode(err[-KEEP_BYTES:]).decode("ascii"),
+            "timed_out": timed_out,
+            "flooded": flooded,
+            "oom_kills": None if before is None or after is None else after - before,
+            "left_running": left_running,
+        }
+
+    # --- between candidates --------------------------------------------------------------
+    def op_reset(self, req):
+        """Empty the work dir and scratch areas; report anything a candidate put outside
+        the work dir and anything that could not be removed."""
+        left_running = sweep()
+        outside = []
+        for top in SCRATCH:
+            try:
+                outside += [os.path.join(top, n) for n in os.listdir(top)]
+            except OSError:
+                pass
+        residue = []
+        for top in (WORK,) + SCRATCH:
+            try:
+                os.chmod(top, 0o700 if top == WORK else 0o1777)
+            except OSError:
+                pass
+            try:
+                names = os.listdir(top)
+            except OSError as exc:
+                residue.append("%s: %s" % (top, exc))
+                continue
+            for name in names:
+                try:
+                    remove_tree(os.path.join(top, name))
+                except (OSError, RecursionError) as exc:
+                    residue.append("%s: %s" % (os.path.join(top, name), exc))
+        return {"outside": outside[:20], "residue": residue[:20], "left_running": left_running,
+                "memory_bytes": memory_usage()}
+
+    def op_hello(self, req):
+        return {"pid": os.getpid(), "uid": os.getuid(), "oom_counter": bool(self.oom_files),
+                "python": sys.version.split()[0], "memory_bytes": memory_usage()}
+
+
+def step_preexec(limits):
+    cpu = max(1, int(float(limits["cpu_seconds"]) + 0.999))
+    fsize = int(limits["max_file_mb"]) * 1024 * 1024
+
+    def preexec():
+        for sig in IGNORED:
+            signal.signal(sig, signal.SIG_DFL)
+        resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
+        resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
+        resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
+        # The memory cgroup's OOM killer must pick the step, never the supervisor.
+        with open("/proc/self/oom_score_adj", "w") as handle:
+            handle.write("1000")
+
+    return preexec
+
+
+def collect(proc, limits, started):
+    """Read both pipes until EOF, the wall-clock deadline or the output cap (the same rules as
+    the local backends' harness/sandbox/process.py)."""
+    deadline = started + float(limits["wall_seconds"])
+    cap = int(limits["max_output_kb"]) * 1024
+    buffers = {proc.stdout: bytearray(), proc.stderr: bytearray()}
+    total = 0
+    timed_out = flooded = False
+    with selectors.DefaultSelector() as selector:
+        for stream in buffers:
+            selector.register(stream, selectors.EVENT_READ)
+        while selector.get_map():
+            remaining = deadline - time.monotonic()
+            if remaining <= 0:
+                timed_out = True
+                break
+            for key, _ in selector.select(timeout=min(remaining, 0.5)):
+                chunk = os.read(key.fd, 65536)
+                if not chunk:
+                    selector.unregister(key.fileobj)
+                    continue
+                total += len(chunk)
+                buffer = buffers[key.fileobj]
+                buffer += chunk
+                if len(buffer) > 2 * KEEP_BYTES:
+                    del buffer[: len(buffer) - KEEP_BYTES]
+                if total > cap:
+                    flooded = True
+                    break
+            if flooded:
+                break
+    if timed_out or flooded:
+        kill_group(proc.pid)
+    try:
+        proc.wait(timeout=max(1.0, deadline - time.monotonic()))
+    except subprocess.TimeoutExpired:
+        timed_out = True
+        kill_group(proc.pid)
+        proc.wait()
+    kill_group(proc.pid)
+    for stream in buffers:
+        stream.close()
+    return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded
+
+
+def kill_group(pgid):
+    try:
+        os.killpg(pgid, signal.SIGKILL)
+    except (ProcessLookupError, PermissionError):
+        pass
+
+
+def sweep():
+    """Kill and reap every process but this one; return how many were still running (zombies,
+    finished but not yet reaped, do not count)."""
+    me = os.getpid()
+    running = None
+    for _ in range(200):
+        pids = [int(p) for p in os.listdir("/proc") if p.isdigit() and int(p) != me]
+        if running is None:
+            running = sum(1 for pid in pids if process_state(pid) not in ("Z", "X", None))
+        for pid in pids:
+            try:
+                os.kill(pid, signal.SIGKILL)
+            except (ProcessLookupError, PermissionError):
+                pass
+        reap()
+        if not pids:
+            break
+        time.sleep(0.005)
+    return running or 0
+
+
+def process_state(pid):
+    try:
+        text = open("/proc/%d/stat" % pid).read()
+    except OSError:
+        return None
+    return text[text.rfind(")") + 2:][:1]
+
+
+def reap():
+    while True:
+        try:
+            pid, _ = os.waitpid(-1, os.WNOHANG)
+        except ChildProcessError:
+            return
+        if pid == 0:
+            return
+
+
+def remove_tree(path):
+    info = os.lstat(path)
+    if stat.S_ISDIR(info.st_mode):
+        os.chmod(path, 0o700)
+        for name in os.listdir(path):
+            remove_tree(os.path.join(path, name))
+        os.rmdir(path)
+    else:
+        os.unlink(path)
+
+
+def main():
+    try:
+        ctypes.CDLL(None).prctl(PR_SET_DUMPABLE, 0, 0, 0, 0)
+    except (OSError, AttributeError):
+        pass
+    for sig in IGNORED:
+        signal.signal(sig, signal.SIG_IGN)
+    supervisor = Supervisor()
+    out = sys.stdout.buffer
+    handlers = {"hello": supervisor.op_hello, "write": supervisor.op_write, "read": supervisor.op_read,
+                "run": supervisor.op_run, "reset": supervisor.op_reset}
+    for line in sys.stdin.buffer:
+        seq = None
+        try:
+            request = json.loads(line)
+            seq = request.get("seq")
+            reply = handlers[request["op"]](request)
+            reply["ok"] = True
+        except Exception as exc:  # reported to the backend, which treats it as a sandbox failure
+            reply = {"ok": False, "error": "%s: %s" % (type(exc).__name__, exc)}
+        reply["seq"] = seq
+        out.write(json.dumps(reply).encode("ascii") + b"\n")
+        out.flush()
+        reap()
+    # stdin closed: the harness is gone; exiting stops the container.
+
+
+if __name__ == "__main__":
+    main()
