@@ -28,7 +28,8 @@ CORRECT_FORMS = ("reference", "trailing_text")
 FAULT_WEIGHTS = {"wrong_logic": 6, "runtime_error": 3, "syntax_error": 2, "early_exit": 1,
                  "infinite_loop": 1, "memory_blowup": 1}
 SAMPLES_PER_PROBLEM = 6
-DEMO_LIMITS = {"wall_seconds": 2.0, "cpu_seconds": 2.0, "memory_mb": 128}
+PROBLEMS_PER_LANGUAGE = 15  # keeps the demo under two minutes on 2 cores with compiled languages
+DEMO_LIMITS = {"wall_seconds": 2.0, "cpu_seconds": 2.0, "memory_mb": 256}
 
 
 def demo_templates(runtime: Runtime) -> list[str]:
@@ -45,14 +46,19 @@ def render_form(runtime: Runtime, problem, form: str) -> str:
     return runtime.templates.get_template(f"demo/{form}.j2").render(context)
 
 
+def demo_problems(problem_set: ProblemSet, language: str) -> list:
+    """The same problems for every language where references allow: those with the most
+    references first, spread over difficulties, at most PROBLEMS_PER_LANGUAGE."""
+    ranked = sorted(problem_set.problems.values(), key=lambda p: (-len(p.reference), p.id))
+    return [p for p in ranked if language in p.reference][:PROBLEMS_PER_LANGUAGE]
+
+
 def write_dump(path: Path, label: str, chance: float, problem_set: ProblemSet, runtimes: dict[str, Runtime]) -> int:
     rng = random.Random(label)
     rows = 0
     with open(path, "w", encoding="utf-8") as handle:
-        for problem in problem_set.problems.values():
-            for name, runtime in runtimes.items():
-                if name not in problem.reference:
-                    continue
+        for name, runtime in runtimes.items():
+            for problem in demo_problems(problem_set, name):
                 available = set(demo_templates(runtime))
                 faults = [f for f in FAULT_WEIGHTS if f in available]
                 correct = [f for f in CORRECT_FORMS if f == "reference" or f in available]
@@ -83,7 +89,9 @@ def run_demo(out: Path, sandbox: Sandbox, jobs: int = 2, progress: bool = True,
     for label, chance in CHECKPOINTS.items():
         dump = out / "dumps" / f"{label}.jsonl"
         write_dump(dump, label, chance, problem_set, runtimes)
+        # The shared cache runs a program both checkpoints wrote only once, as in real use.
         options = ScoreOptions(dumps=[dump], out=out / label, jobs=jobs, ks=[1, 5],
-                               limit_overrides=dict(DEMO_LIMITS), progress=progress, label=label)
+                               limit_overrides=dict(DEMO_LIMITS), progress=progress, label=label,
+                               cache_dir=out / "cache")
         results[label] = score(options, problem_set, runtimes, sandbox)
     return results

@@ -63,7 +63,7 @@ class Difference:
     estimate: float
     low: float
     high: float
-    p_value: float
+    p_value: float | None  # None with a single problem: one unit says nothing about spread
     method: str
     confidence: float
     resamples: int
@@ -189,8 +189,8 @@ def paired_bootstrap(numerator_a, numerator_b, weight=None, *, confidence: float
     b_value = float(_ratio(numerator_b, weight))
     estimate = float(difference(numerator_a, numerator_b, weight))
     replicates = _replicates([numerator_a, numerator_b, weight], difference, resamples, seed)
-    p_value = bootstrap_p_value(replicates)
     units = len(weight)
+    p_value = bootstrap_p_value(replicates) if units >= 2 else None
     if np.ptp(replicates) == 0 or units < 2:
         return Difference(a_value, b_value, estimate, estimate, estimate, p_value, method, confidence,
                           resamples, units)

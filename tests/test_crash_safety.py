@@ -87,3 +87,16 @@ def test_scoring_the_same_dump_twice_gives_identical_verdicts(tmp_path, tiny_set
     assert verdict_set(tmp_path / "a") == verdict_set(tmp_path / "b")
     details = lambda out: {(r["sample"], r["cases_passed"], r["detail"]) for r in read_rows(out)}  # noqa: E731
     assert details(tmp_path / "a") == details(tmp_path / "b")
+
+
+def test_report_refuses_headline_figures_while_infra_errors_remain(tmp_path, tiny_set):
+    out = tmp_path / "out"
+    assay("score", write_dump(tmp_path / "a.jsonl", mixed_rows(4)), "--set", tiny_set, "--out", out, "-q")
+    summary = json.loads((out / "summary.json").read_text())
+    summary["infra_errors"] = 1
+    (out / "summary.json").write_text(json.dumps(summary))
+    refused = assay("report", out, check=False)
+    assert refused.returncode == 2 and "infra_error" in refused.stderr and "Rerun" in refused.stderr
+    assert "pass@1" not in refused.stdout
+    allowed = assay("report", out, "--allow-infra-errors")
+    assert "pass@1" in allowed.stdout
