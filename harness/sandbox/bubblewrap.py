@@ -7,15 +7,14 @@ environment, and, when Assay runs as root, as the unprivileged ``nobody`` user.
 
 from __future__ import annotations
 
-import contextlib
 import os
 import shutil
 import subprocess
-import tempfile
 from pathlib import Path
 
 from . import cgroups
 from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
+from .local import LocalSandbox, LocalWorkspace, candidate_env
 from .process import run_limited
 
 NOBODY = 65534
@@ -23,46 +22,6 @@ BASE_RO_BINDS = ("/usr", "/etc/ld.so.cache", "/etc/alternatives", "/etc/localtim
 TOP_LEVEL_LINKS = ("/bin", "/lib", "/lib64", "/lib32", "/sbin")
 WORK_DIR = "/work"
 STATUS_FD = "{status-fd}"
-
-
-def default_work_root() -> str:
-    """Work dirs live in RAM (/dev/shm) when possible: pages a candidate writes there are
-    charged to its memory cgroup, so filling the disk is bounded by the memory limit."""
-    shm = "/dev/shm"
-    if os.path.isdir(shm) and os.access(shm, os.W_OK):
-        return shm
-    return tempfile.gettempdir()
-
-
-class LocalWorkspace:
-    """A host temp folder for one candidate; subclasses decide how a step is wrapped."""
-
-    def __init__(self, root: Path, owner: int | None):
-        self.path = Path(tempfile.mkdtemp(prefix="cand-", dir=root))
-        self.owner = owner
-        if owner is not None:
-            os.chown(self.path, owner, owner)
-        os.chmod(self.path, 0o700)
-
-    def write(self, name: str, content: str) -> None:
-        target = self.path / name
-        target.parent.mkdir(parents=True, exist_ok=True)
-        target.write_text(content, encoding="utf-8")
-        if self.owner is not None:
-            os.chown(target, self.owner, self.owner)
-
-    def read(self, name: str, max_bytes: int) -> bytes | None:
-        target = self.path / name
-        try:
-            # O_NOFOLLOW: a candidate could replace the file with a link to a host file.
-            fd = os.open(target, os.O_RDONLY | os.O_NOFOLLOW)
-        except OSError:
-            return None
-        with os.fdopen(fd, "rb") as handle:
-            return handle.read(max_bytes)
-
-    def remove(self) -> None:
-        shutil.rmtree(self.path, ignore_errors=True)
 
 
 class BubblewrapWorkspace(LocalWorkspace):
@@ -91,15 +50,15 @@ class BubblewrapWorkspace(LocalWorkspace):
         return result
 
 
-class BubblewrapSandbox:
+class BubblewrapSandbox(LocalSandbox):
     name = "bubblewrap"
+    workspace_class = BubblewrapWorkspace
 
     def __init__(self, work_root: Path | None = None):
+        super().__init__(work_root, "assay-work-")
         self.bwrap = shutil.which("bwrap")
         self.run_as = NOBODY if os.geteuid() == 0 else None
         self.cgroups = cgroups.detect()
-        # One folder per sandbox object, so two sandboxes in one process never share it.
-        self.work_root = Path(tempfile.mkdtemp(prefix="assay-work-", dir=work_root or default_work_root()))
 
     def check(self) -> None:
         if not self.bwrap:
@@ -120,17 +79,6 @@ class BubblewrapSandbox:
                 "bubblewrap cannot create a sandbox here (user namespaces disabled?): "
                 + (probe.infra_error or probe.stderr.strip()[:300] or f"exit {probe.exit_code}")
             )
-
-    @contextlib.contextmanager
-    def workspace(self, needs: RuntimeSandboxNeeds):
-        space = BubblewrapWorkspace(self, needs)
-        try:
-            yield space
-        finally:
-            space.remove()
-
-    def close(self) -> None:
-        shutil.rmtree(self.work_root, ignore_errors=True)
 
     def describe(self) -> dict:
         version = subprocess.run([self.bwrap, "--version"], capture_output=True, text=True).stdout.strip()
@@ -163,9 +111,6 @@ class BubblewrapSandbox:
         for path in BASE_RO_BINDS + tuple(needs.ro_binds):
             argv += ["--ro-bind-try", path, path]
         argv += ["--remount-ro", "/"]  # the sandbox's own root too: only /work and /tmp take writes
-        merged = {"HOME": WORK_DIR, "TMPDIR": "/tmp", "LANG": "C.UTF-8", "PATH": "/usr/local/bin:/usr/bin:/bin"}
-        merged.update(dict(needs.env))
-        merged.update(env)
-        for key, value in merged.items():
+        for key, value in candidate_env(needs, env, home=WORK_DIR, tmp="/tmp").items():
             argv += ["--setenv", key, value]
         return argv

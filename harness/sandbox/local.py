@@ -1,0 +1,83 @@
+"""What the backends that run candidates as local processes share: a per-sandbox work root
+(in RAM where possible), per-candidate work dirs, and the candidate's base environment."""
+
+from __future__ import annotations
+
+import contextlib
+import os
+import shutil
+import tempfile
+from pathlib import Path
+
+from .base import RuntimeSandboxNeeds
+
+BASE_PATH = "/usr/local/bin:/usr/bin:/bin"
+
+
+def default_work_root() -> str:
+    """Work dirs live in RAM (/dev/shm) when possible: pages a candidate writes there are
+    charged to its memory cgroup, so filling the disk is bounded by the memory limit."""
+    shm = "/dev/shm"
+    if os.path.isdir(shm) and os.access(shm, os.W_OK):
+        return shm
+    return tempfile.gettempdir()
+
+
+class LocalWorkspace:
+    """A host temp folder for one candidate; subclasses decide how a step is wrapped."""
+
+    def __init__(self, root: Path, owner: int | None):
+        self.path = Path(tempfile.mkdtemp(prefix="cand-", dir=root))
+        self.owner = owner
+        if owner is not None:
+            os.chown(self.path, owner, owner)
+        os.chmod(self.path, 0o700)
+
+    def write(self, name: str, content: str) -> None:
+        target = self.path / name
+        target.parent.mkdir(parents=True, exist_ok=True)
+        target.write_text(content, encoding="utf-8")
+        if self.owner is not None:
+            os.chown(target, self.owner, self.owner)
+
+    def read(self, name: str, max_bytes: int) -> bytes | None:
+        target = self.path / name
+        try:
+            # O_NOFOLLOW: a candidate could replace the file with a link to a host file.
+            fd = os.open(target, os.O_RDONLY | os.O_NOFOLLOW)
+        except OSError:
+            return None
+        with os.fdopen(fd, "rb") as handle:
+            return handle.read(max_bytes)
+
+    def remove(self) -> None:
+        shutil.rmtree(self.path, ignore_errors=True)
+
+
+def candidate_env(needs: RuntimeSandboxNeeds, env: dict[str, str], home: str, tmp: str) -> dict[str, str]:
+    """A clean environment: a few basics, then the runtime's needs, then the step's own."""
+    merged = {"HOME": home, "TMPDIR": tmp, "LANG": "C.UTF-8", "PATH": BASE_PATH}
+    merged.update(dict(needs.env))
+    merged.update(env)
+    return merged
+
+
+class LocalSandbox:
+    """Owns one work root; subclasses set ``workspace_class`` and their checks."""
+
+    workspace_class: type
+
+    def __init__(self, work_root: Path | None, prefix: str):
+        # One folder per sandbox object, so two sandboxes in one process never share it.
+        self.work_root = Path(tempfile.mkdtemp(prefix=prefix, dir=work_root or default_work_root()))
+
+    @contextlib.contextmanager
+    def workspace(self, needs: RuntimeSandboxNeeds):
+        space = self.workspace_class(self, needs)
+        try:
+            yield space
+        finally:
+            space.remove()
+
+    def close(self) -> None:
+        shutil.rmtree(self.work_root, ignore_errors=True)
