@@ -1,0 +1,6 @@
+auto found = stock.find(item);
+if (found == stock.end()) {
+    return std::nullopt;
+}
+return found->second;
+}

@@ -1,0 +1,3 @@
+const auto& [name, enabled] = entry;
+return name + (enabled ? ":on" : ":off") + suffix.value_or("");
+}

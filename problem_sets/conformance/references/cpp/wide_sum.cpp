@@ -1,0 +1,2 @@
+return std::accumulate(values.begin(), values.end(), int64_t{0});
+}

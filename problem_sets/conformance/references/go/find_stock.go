@@ -1,0 +1,5 @@
+if level, ok := stock[item]; ok {
+	return &level
+}
+return nil
+}

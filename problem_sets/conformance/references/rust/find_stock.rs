@@ -1,0 +1,2 @@
+stock.get(&item).copied()
+}

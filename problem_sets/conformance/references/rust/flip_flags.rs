@@ -1,0 +1,2 @@
+flags.into_iter().map(|flag| !flag).collect()
+}

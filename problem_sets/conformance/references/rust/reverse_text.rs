@@ -1,0 +1,2 @@
+text.chars().rev().collect()
+}

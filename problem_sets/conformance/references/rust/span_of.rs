@@ -1,0 +1,4 @@
+let smallest = *values.iter().min()?;
+let largest = *values.iter().max()?;
+Some((smallest, largest))
+}

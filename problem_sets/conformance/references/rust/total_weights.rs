@@ -1,0 +1,2 @@
+crates.values().flat_map(|items| items.values()).sum()
+}

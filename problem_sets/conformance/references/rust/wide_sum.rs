@@ -1,0 +1,2 @@
+values.iter().sum()
+}

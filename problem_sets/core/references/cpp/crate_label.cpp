@@ -1,0 +1,5 @@
+if (!name || name->empty()) {
+    return "Crate #" + std::to_string(number);
+}
+return *name + " #" + std::to_string(number);
+}
