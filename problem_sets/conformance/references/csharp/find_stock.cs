@@ -1,0 +1,7 @@
+    long level;
+    if (stock.TryGetValue(item, out level))
+    {
+        return level;
+    }
+    return null;
+}

@@ -1,0 +1,2 @@
+    return flags.Select(flag => !flag).ToList();
+}

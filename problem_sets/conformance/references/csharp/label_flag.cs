@@ -1,0 +1,2 @@
+    return entry.Item1 + (entry.Item2 ? ":on" : ":off") + (suffix ?? "");
+}

@@ -1,0 +1,7 @@
+    long total = 0;
+    foreach (long value in values)
+    {
+        total += value;
+    }
+    return total;
+}

@@ -1,0 +1,6 @@
+    List<Boolean> flipped = new ArrayList<>();
+    for (boolean flag : flags) {
+        flipped.add(!flag);
+    }
+    return flipped;
+}

@@ -1,0 +1,2 @@
+    return new StringBuilder(text).reverse().toString();
+}

@@ -1,0 +1,5 @@
+    if (values.isEmpty()) {
+        return null;
+    }
+    return new Pair<>(Collections.min(values), Collections.max(values));
+}

@@ -1,0 +1,2 @@
+    return [map { $_ ? 0 : 1 } @$flags];
+}

@@ -1,0 +1,7 @@
+    my %groups;
+    for my $name (@$names) {
+        next if $name eq '';
+        push @{ $groups{ substr($name, 0, 1) } }, $name;
+    }
+    return \%groups;
+}

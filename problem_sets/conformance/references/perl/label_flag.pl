@@ -1,0 +1,3 @@
+    my ($name, $enabled) = @$entry;
+    return $name . ($enabled ? ':on' : ':off') . ($suffix // '');
+}

@@ -1,0 +1,4 @@
+    my $total = 0;
+    $total += $_ for @$values;
+    return $total;
+}

@@ -1,0 +1,2 @@
+    return Long.toString(n, (int) base);
+}

@@ -1,0 +1,5 @@
+    if (name == null || name.isEmpty()) {
+        return "Crate #" + number;
+    }
+    return name + " #" + number;
+}

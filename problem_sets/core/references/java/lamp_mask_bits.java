@@ -1,0 +1,2 @@
+    return Long.bitCount(mask);
+}

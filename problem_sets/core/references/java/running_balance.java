@@ -1,0 +1,8 @@
+    List<Long> balances = new ArrayList<>();
+    long balance = 0;
+    for (long delta : deltas) {
+        balance += delta;
+        balances.add(balance);
+    }
+    return balances;
+}

@@ -1,0 +1,5 @@
+    if (readings.isEmpty()) {
+        return 0;
+    }
+    return Collections.max(readings) - Collections.min(readings);
+}
