@@ -4,12 +4,12 @@ from __future__ import annotations
 
 import concurrent.futures as futures
 
-import yaml
 
 from .completions import Sample
 from .execution import Executor
 from .problems import ProblemSet
 from .runtimes import Runtime, indent_lines
+from .yamlfiles import read_yaml
 from .sandbox import Sandbox
 
 
@@ -42,7 +42,9 @@ def load_wrong_candidates(runtime: Runtime) -> list[dict]:
     path = runtime.path / CHECKS_FILE
     if not path.is_file():
         return []
-    entries = yaml.safe_load(path.read_text(encoding="utf-8")) or []
+    entries = read_yaml(path, ValueError) or []
+    if not isinstance(entries, list):
+        raise ValueError(f"{path}: expected a list of checks")
     for i, entry in enumerate(entries):
         if not isinstance(entry, dict) or not all(isinstance(entry.get(k), str)
                                                   for k in ("name", "problem", "expect", "completion")):

@@ -262,7 +262,9 @@ def judge(problem: Problem, runtime: Runtime, ran: StepResult, results: bytes, n
             how = f"exited with status {ran.exit_code}"
         where = f"before case {missing} reported" if missing < total else "before the test driver finished"
         stderr = _tail(ran.stderr)
-        return verdict("runtime_error", f"{how} {where}" + (f": {stderr}" if stderr else ""))
+        # A runtime may die of a limit without reporting a case (a fatal out-of-memory abort).
+        outcome = _error_outcome(runtime, stderr) if stderr else "runtime_error"
+        return verdict(outcome, f"{how} {where}" + (f": {stderr}" if stderr else ""))
     if ran.exit_code != 0:
         return verdict("runtime_error", f"all cases reported, but the program exited with status {ran.exit_code}")
     return verdict("passed", "")

@@ -7,9 +7,8 @@ import re
 from dataclasses import dataclass, field
 from pathlib import Path
 
-import yaml
-
 from .locations import bundled_dir
+from .yamlfiles import read_yaml
 from .valuetypes import Type, TypeSyntaxError, check_value, parse_type
 
 DIFFICULTIES = ("easy", "medium", "hard")
@@ -122,14 +121,7 @@ def _sidecar_references(path: Path):
 
 
 def _read_yaml(file: Path):
-    try:
-        return yaml.safe_load(file.read_text(encoding="utf-8"))
-    except yaml.YAMLError as exc:
-        mark = getattr(exc, "problem_mark", None)
-        where = f"{file}:{mark.line + 1}" if mark else str(file)
-        raise ProblemError(f"{where}: invalid YAML: {getattr(exc, 'problem', exc)}") from None
-    except UnicodeDecodeError as exc:
-        raise ProblemError(f"{file}: not UTF-8 text ({exc.reason} at byte {exc.start})") from None
+    return read_yaml(file, ProblemError)
 
 
 def parse_problem(data: object, file: Path) -> Problem:

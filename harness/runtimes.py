@@ -18,11 +18,11 @@ from functools import cached_property
 from pathlib import Path
 
 import jinja2
-import yaml
 
 from .locations import runtime_search_path
 from .problems import Problem
 from .sandbox.base import Limits, RuntimeSandboxNeeds
+from .yamlfiles import read_yaml
 
 RUNTIME_FILE = "runtime.yaml"
 # Toolchains are looked up on the PATH the sandbox sees, not the invoking user's.
@@ -193,13 +193,7 @@ def available_runtimes(extra: list[Path] | None = None) -> list[str]:
 def load_runtime(name: str, extra: list[Path] | None = None) -> Runtime:
     path = find_runtime_dir(name, extra)
     file = path / RUNTIME_FILE
-    try:
-        data = yaml.safe_load(file.read_text(encoding="utf-8"))
-    except yaml.YAMLError as exc:
-        mark = getattr(exc, "problem_mark", None)
-        where = f"{file}:{mark.line + 1}" if mark else str(file)
-        raise RuntimeConfigError(f"{where}: invalid YAML: {getattr(exc, 'problem', exc)}") from None
-    return parse_runtime(data, path, file)
+    return parse_runtime(read_yaml(file, RuntimeConfigError), path, file)
 
 
 def parse_runtime(data: object, path: Path, file: Path) -> Runtime:

@@ -133,7 +133,8 @@ class ResultStore:
 
     def _write(self, handle, data: dict) -> None:
         try:
-            handle.write(json.dumps(data, ensure_ascii=False) + "\n")
+            # ASCII escapes: a candidate's output may hold lone surrogates, which no UTF-8 file takes.
+            handle.write(json.dumps(data, ensure_ascii=True) + "\n")
             handle.flush()
         except OSError as exc:
             raise StoreWriteError(

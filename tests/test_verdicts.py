@@ -94,3 +94,26 @@ def test_results_without_this_runs_nonce_are_ignored():
     data = b'{"case": 0, "value": 1, "nonce": "other"}\n{"case": 0, "value": 2, "nonce": "n"}\n{"done": true}\n'
     records, done = parse_results(data, "n")
     assert records[0]["value"] == 2 and not done
+
+
+def test_a_fatal_limit_message_on_stderr_is_judged_as_that_limit(tiny_set, python_runtime):
+    from harness.execution import judge
+    from harness.sandbox import Limits, StepResult
+
+    problem = load_problem_set(str(tiny_set)).problems["add_pair"]
+    died = StepResult(exit_code=1, stderr="Traceback ...\nMemoryError\n")
+    assert judge(problem, python_runtime, died, b"", "n", Limits()).outcome == "memory_limit"
+    crashed = StepResult(exit_code=1, stderr="Traceback ...\nKeyError: 'x'\n")
+    assert judge(problem, python_runtime, crashed, b"", "n", Limits()).outcome == "runtime_error"
+
+
+def test_a_malformed_checks_file_names_file_and_line(tmp_path, python_runtime):
+    import shutil
+
+    from harness.checks import load_wrong_candidates
+    from harness.runtimes import load_runtime
+
+    shutil.copytree(python_runtime.path, tmp_path / "python")
+    (tmp_path / "python" / "checks.yaml").write_text("- name: x\n  problem: [oops\n")
+    with pytest.raises(ValueError, match=r"checks\.yaml:\d+: invalid YAML"):
+        load_wrong_candidates(load_runtime("python", [tmp_path]))
