@@ -1,0 +1,2 @@
+return flags.map((flag) => !flag);
+}

@@ -1,0 +1,3 @@
+// Spreading a string iterates code points, so surrogate pairs stay together.
+return [...text].reverse().join("");
+}

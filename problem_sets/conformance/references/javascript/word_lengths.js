@@ -1,0 +1,4 @@
+const lengths = {};
+for (const word of words) lengths[word] = BigInt([...word].length);
+return lengths;
+}

@@ -1,0 +1,2 @@
+return array_map(static fn (bool $flag): bool => !$flag, $flags);
+}

@@ -1,0 +1,3 @@
+[$name, $enabled] = $entry;
+return $name . ($enabled ? ':on' : ':off') . ($suffix ?? '');
+}

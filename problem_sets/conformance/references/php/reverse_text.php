@@ -1,0 +1,2 @@
+return implode('', array_reverse(mb_str_split($text)));
+}

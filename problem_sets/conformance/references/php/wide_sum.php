@@ -1,0 +1,2 @@
+return array_sum($values);
+}

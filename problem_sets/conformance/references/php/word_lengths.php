@@ -1,0 +1,6 @@
+$lengths = [];
+foreach ($words as $word) {
+    $lengths[$word] = mb_strlen($word);
+}
+return $lengths;
+}

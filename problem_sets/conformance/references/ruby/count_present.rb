@@ -1,0 +1,3 @@
+present = readings.compact
+[present.sum, readings.size - present.size]
+end

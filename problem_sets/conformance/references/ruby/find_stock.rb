@@ -1,0 +1,2 @@
+stock[item]
+end

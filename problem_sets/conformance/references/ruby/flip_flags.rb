@@ -1,0 +1,2 @@
+flags.map { |flag| !flag }
+end

@@ -1,0 +1,2 @@
+names.reject(&:empty?).group_by { |name| name[0] }
+end

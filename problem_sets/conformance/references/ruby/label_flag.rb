@@ -1,0 +1,3 @@
+name, enabled = entry
+"#{name}#{enabled ? ':on' : ':off'}#{suffix}"
+end

@@ -1,0 +1,4 @@
+return [] if grid.empty? || grid.first.empty?
+
+grid.transpose
+end

@@ -1,0 +1,2 @@
+values.sum
+end

@@ -1,0 +1,2 @@
+words.to_h { |word| [word, word.length] }
+end

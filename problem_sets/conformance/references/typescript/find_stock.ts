@@ -1,0 +1,2 @@
+return Object.hasOwn(stock, item) ? stock[item] : null;
+}

@@ -1,0 +1,3 @@
+const [name, enabled] = entry;
+return name + (enabled ? ":on" : ":off") + (suffix ?? "");
+}

@@ -1,0 +1,2 @@
+return values.reduce((sum, value) => sum + value, 0n);
+}

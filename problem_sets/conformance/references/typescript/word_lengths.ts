@@ -1,0 +1,4 @@
+const lengths: Record<string, bigint> = {};
+for (const word of words) lengths[word] = BigInt([...word].length);
+return lengths;
+}

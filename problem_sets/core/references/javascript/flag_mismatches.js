@@ -1,0 +1,5 @@
+const left = [...a];
+const right = [...b];
+if (left.length !== right.length) return null;
+return BigInt(left.filter((flag, i) => flag !== right[i]).length);
+}

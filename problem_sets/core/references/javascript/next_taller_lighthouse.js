@@ -1,0 +1,10 @@
+const result = new Array(heights.length).fill(-1n);
+const waiting = [];
+heights.forEach((height, i) => {
+  while (waiting.length > 0 && heights[waiting[waiting.length - 1]] < height) {
+    result[waiting.pop()] = BigInt(i);
+  }
+  waiting.push(i);
+});
+return result;
+}

@@ -1,0 +1,11 @@
+const trim = (part) => part.replace(/^[ \t]+|[ \t]+$/g, "");
+const totals = new Map();
+for (const line of text.split("\n")) {
+  if (trim(line) === "") continue;
+  const colon = line.indexOf(":");
+  const name = trim(line.slice(0, colon));
+  const quantity = BigInt(trim(line.slice(colon + 1)));
+  totals.set(name, (totals.get(name) ?? 0n) + quantity);
+}
+return Object.fromEntries(totals);
+}

@@ -1,0 +1,12 @@
+let out = "";
+let count = 0;
+for (const ch of code) {
+  if (ch >= "0" && ch <= "9") {
+    count = count * 10 + Number(ch);
+  } else {
+    out += ch.repeat(count);
+    count = 0;
+  }
+}
+return out;
+}
