@@ -28,7 +28,7 @@ CORRECT_FORMS = ("reference", "trailing_text")
 FAULT_WEIGHTS = {"wrong_logic": 6, "runtime_error": 3, "syntax_error": 2, "early_exit": 1,
                  "infinite_loop": 1, "memory_blowup": 1}
 SAMPLES_PER_PROBLEM = 6
-PROBLEMS_PER_LANGUAGE = 15  # keeps the demo under two minutes on 2 cores with compiled languages
+PROBLEMS_PER_LANGUAGE = 12  # keeps the demo under two minutes on 2 cores with compiled languages
 DEMO_LIMITS = {"wall_seconds": 2.0, "cpu_seconds": 2.0, "memory_mb": 256}
 
 
