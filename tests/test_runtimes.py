@@ -84,3 +84,28 @@ def test_runtimes_list_reports_toolchains():
     done = subprocess.run([sys.executable, "-m", "harness", "runtimes", "list", "--json"], capture_output=True, text=True)
     rows = {r["name"]: r for r in json.loads(done.stdout)}
     assert rows["python"]["toolchain"].startswith("Python 3")
+
+
+def test_prompts_for_every_language_are_exactly_what_scoring_continues(tmp_path):
+    """`assay prompts` rows must be the text the executor prepends in continue mode, so the
+    conformance references (which the checks above score in continue mode) pass from them."""
+    from harness.completions import Sample
+    from harness.execution import Executor
+
+    prompts = tmp_path / "prompts.jsonl"
+    args = [sys.executable, "-m", "harness", "prompts", "--set", CONFORMANCE_SET, "-o", str(prompts)]
+    for name in BUNDLED:
+        args += ["--lang", name]
+    assert subprocess.run(args, capture_output=True).returncode == 0
+    rows = [json.loads(line) for line in prompts.read_text(encoding="utf-8").splitlines()]
+    conformance = load_problem_set(CONFORMANCE_SET)
+    assert len(rows) == len(BUNDLED) * len(conformance)
+    runtimes = {name: load_runtime(name) for name in BUNDLED}
+    executor = Executor(None, conformance, runtimes)
+    for row in rows:
+        runtime = runtimes[row["language"]]
+        problem = conformance.problems[row["problem"]]
+        reference = runtime.reference_completion(problem)
+        sample = Sample(row["problem"], row["language"], 0, reference, "prompts", 0)
+        assert executor.code(sample) == row["prompt"] + reference
+        assert row["stop_sequences"] == list(runtime.stop_sequences)
