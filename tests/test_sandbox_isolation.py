@@ -69,7 +69,7 @@ def test_background_children_do_not_outlive_the_candidate(sandbox):
     tag = f"assay-orphan-{os.getpid()}-{time.time_ns()}"
     code = (
         "import subprocess, sys\n"
-        f"subprocess.Popen(['sh', '-c', 'exec -a {tag} sleep 30'], start_new_session=True)\n"
+        f"subprocess.Popen(['bash', '-c', 'exec -a {tag} sleep 30'], start_new_session=True)\n"
         "print('spawned')\n"
     )
     result, _ = run_python(sandbox, code)
