@@ -5,7 +5,6 @@ Every line of every dump ends up as exactly one Sample or one Reject, so nothing
 
 from __future__ import annotations
 
-import hashlib
 import json
 import re
 from dataclasses import dataclass
@@ -41,10 +40,35 @@ class Reject:
         return {"source": self.source, "line": self.line, "reason": self.reason}
 
 
-def key_hash(problem: str, language: str, sample: int) -> int:
-    """A compact 64-bit stand-in for a sample key, so key sets stay small for huge dumps."""
-    digest = hashlib.blake2b(f"{problem}\0{language}\0{sample}".encode(), digest_size=8).digest()
-    return int.from_bytes(digest, "little")
+class SampleKeySet:
+    """A set of (problem, language, sample) keys at about one bit per sample, so it stays small
+    for dumps of millions of rows: a bitmap per (problem, language) pair for sample indices
+    below 2**24, a plain set for the rare larger ones."""
+
+    BITMAP_LIMIT = 1 << 24
+
+    def __init__(self) -> None:
+        self._bits: dict[tuple[str, str], bytearray] = {}
+        self._large: set[tuple[str, str, int]] = set()
+
+    def add(self, key: tuple[str, str, int]) -> None:
+        problem, language, index = key
+        if index >= self.BITMAP_LIMIT:
+            self._large.add(key)
+            return
+        bitmap = self._bits.setdefault((problem, language), bytearray())
+        byte = index >> 3
+        if byte >= len(bitmap):
+            bitmap.extend(bytes(max(byte + 1 - len(bitmap), len(bitmap))))  # grow by doubling
+        bitmap[byte] |= 1 << (index & 7)
+
+    def __contains__(self, key: tuple[str, str, int]) -> bool:
+        problem, language, index = key
+        if index >= self.BITMAP_LIMIT:
+            return key in self._large
+        bitmap = self._bits.get((problem, language))
+        byte = index >> 3
+        return bitmap is not None and byte < len(bitmap) and bool(bitmap[byte] & (1 << (index & 7)))
 
 
 def read_dumps(
@@ -56,7 +80,7 @@ def read_dumps(
     """Yield one Sample or Reject per line, in file order. A row without ``sample`` takes the
     index after the highest seen so far for its (problem, language) pair; a key seen before is
     rejected as a duplicate."""
-    seen: set[int] = set()
+    seen = SampleKeySet()
     next_index: dict[tuple[str, str], int] = {}
     for path in paths:
         source = str(path)
@@ -70,14 +94,13 @@ def read_dumps(
                 pair = (problem, language)
                 if sample is None:
                     sample = next_index.get(pair, 0)
-                    while key_hash(problem, language, sample) in seen:
+                    while (problem, language, sample) in seen:
                         sample += 1
                 next_index[pair] = max(next_index.get(pair, 0), sample + 1)
-                hashed = key_hash(problem, language, sample)
-                if hashed in seen:
+                if (problem, language, sample) in seen:
                     yield Reject(source, number, f"duplicate sample {sample} for problem {problem!r} in {language}")
                     continue
-                seen.add(hashed)
+                seen.add((problem, language, sample))
                 yield Sample(problem, language, sample, completion, source, number)
 
 

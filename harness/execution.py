@@ -43,9 +43,10 @@ class Verdict:
     detail: str = ""
     extra: dict = field(default_factory=dict)
 
-    def row(self, sample: Sample) -> dict:
-        """The executions.jsonl row for ``sample``."""
-        data = {"problem": sample.problem, "language": sample.language, "sample": sample.sample}
+    def row(self, sample_key: tuple[str, str, int]) -> dict:
+        """The executions.jsonl row for the sample with this (problem, language, index) key."""
+        problem, language, index = sample_key
+        data = {"problem": problem, "language": language, "sample": index}
         data.update(asdict(self))
         extra = data.pop("extra")
         data.update(extra)
@@ -77,6 +78,7 @@ class Executor:
         self.limit_overrides = limit_overrides or {}
         self.compile_limit_overrides = compile_limit_overrides or {}
         self._prompt = lru_cache(maxsize=None)(self._render_prompt)
+        self._key_prefix = lru_cache(maxsize=None)(self._key_prefix_uncached)
 
     def _render_prompt(self, problem_id: str, language: str) -> tuple[str, str]:
         runtime = self.runtimes[language]
@@ -108,14 +110,17 @@ class Executor:
         """Content hash of everything that decides a verdict: runtime and problem set contents,
         the problem, the candidate's code after stop sequences, limits and repeats. Samples
         with equal keys are the same experiment, so one execution serves them all."""
-        runtime = self.runtimes[sample.language]
-        compile_limits, run_limits = self.limits_for(runtime)
-        identity = json.dumps([runtime.digest, self.problems.digest, sample.problem, self.repeat,
-                               compile_limits.as_dict() if compile_limits else None, run_limits.as_dict()])
-        hasher = hashlib.sha256(identity.encode())
+        hasher = self._key_prefix(sample.language, sample.problem).copy()
         # Trailing whitespace is the one edit that changes no program in any language.
         hasher.update(b"\0" + self.code(sample).rstrip().encode("utf-8"))
         return hasher.hexdigest()
+
+    def _key_prefix_uncached(self, language: str, problem_id: str):
+        runtime = self.runtimes[language]
+        compile_limits, run_limits = self.limits_for(runtime)
+        identity = json.dumps([runtime.digest, self.problems.digest, problem_id, self.repeat,
+                               compile_limits.as_dict() if compile_limits else None, run_limits.as_dict()])
+        return hashlib.sha256(identity.encode())
 
     def judge_sample(self, sample: Sample) -> Verdict:
         """The verdict to record: infra errors retried with backoff; with ``repeat`` > 1 the

@@ -72,7 +72,7 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
     def mean_over(pairs: list[tuple[str, str]]) -> dict[str, float | None]:
         result: dict[str, float | None] = {}
         for k in ks:
-            values = [per_pair[p][str(k)] for p in pairs]
+            values = [per_pair[p][str(k)] for p in sorted(pairs)]  # sorted: same mean in any row order
             result[str(k)] = None if not values or any(v is None for v in values) else float(np.mean(values))
         return result
 

@@ -13,7 +13,7 @@ from dataclasses import dataclass, field
 from pathlib import Path
 
 from . import __version__
-from .completions import MAX_COMPLETION_BYTES, Reject, key_hash, read_dumps
+from .completions import MAX_COMPLETION_BYTES, Reject, read_dumps
 from .engines import LocalEngine
 from .execution import Executor, Verdict
 from .metrics import read_rows, summarize
@@ -146,8 +146,8 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
             progress = Progress(total, label=options.label or "scoring", enabled=options.progress)
             waiting: dict[str, list] = {}  # program key -> samples sharing the execution in flight
 
-            def record(sample, verdict: Verdict, shared: bool) -> None:
-                row = verdict.row(sample)
+            def record(sample_key: tuple, verdict: Verdict, shared: bool) -> None:
+                row = verdict.row(sample_key)
                 if shared:
                     row["shared"] = True
                     counts["shared"] += 1
@@ -156,38 +156,47 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
                 progress.advance(executed=True, passed=verdict.outcome == "passed")
 
             def jobs():
+                """One item per input row: a job to run, or None for a row settled on the spot
+                (rejected, resumed, or sharing a verdict). Yielding the None too makes every row
+                count against the scheduler's look-ahead, which bounds memory."""
                 for item in read_dumps(options.dumps, set(problems.problems), set(runtimes),
                                        options.max_completion_bytes):
                     if isinstance(item, Reject):
                         store.reject(item)
                         counts["rejected"] += 1
                         progress.advance()
+                        yield None
                         continue
-                    if key_hash(*item.key) in done:
+                    if item.key in done:
                         counts["resumed"] += 1
                         progress.advance()
+                        yield None
                         continue
                     key = executor.program_key(item)
                     if key in waiting:
-                        waiting[key].append(item)
+                        waiting[key].append(item.key)  # the key alone: completions can be large
+                        yield None
                         continue
                     cached = cache.get(key)
                     if cached is not None:
-                        record(item, cached, shared=True)
+                        record(item.key, cached, shared=True)
+                        yield None
                         continue
                     waiting[key] = []
                     yield key, item
 
             def finish(key: str, sample, verdict: Verdict) -> None:
                 cache.put(key, verdict)
-                record(sample, verdict, shared=False)
+                record(sample.key, verdict, shared=False)
                 for other in waiting.pop(key, []):
                     record(other, verdict, shared=True)
 
             def priority(language: str) -> int:
                 return 1 if runtimes[language].compile is not None else 0
 
-            scheduled = interleave(jobs(), group_of=lambda job: job[1].language, priority_of=priority)
+            scheduled = (job for job in interleave(jobs(), group_of=lambda job: job and job[1].language,
+                                                   priority_of=lambda language: language is not None
+                                                   and priority(language)) if job is not None)
             try:
                 for key, sample, verdict in engine.run(scheduled):
                     finish(key, sample, verdict)

@@ -13,7 +13,7 @@ from pathlib import Path
 
 from filelock import FileLock, Timeout
 
-from .completions import Reject, key_hash
+from .completions import Reject, SampleKeySet
 
 EXECUTIONS = "executions.jsonl"
 REJECTS = "rejects.jsonl"
@@ -81,13 +81,13 @@ class ResultStore:
         temporary.write_text(json.dumps(data, indent=2, ensure_ascii=False) + "\n", encoding="utf-8")
         os.replace(temporary, target)
 
-    def recover(self) -> tuple[set[int], int]:
+    def recover(self) -> tuple[SampleKeySet, int]:
         """Keys of samples already judged, and how many rows were dropped for retry.
 
         Repairs the file in place: a torn or unreadable line (a crash mid-write) is removed,
         and so are infra_error rows, which the coming run retries.
         """
-        done: set[int] = set()
+        done = SampleKeySet()
         if not self.executions_path.exists():
             return done, 0
         kept, dropped, rewrite = [], 0, False
@@ -101,7 +101,9 @@ class ResultStore:
         for raw in lines:
             try:
                 row = json.loads(raw)
-                key = key_hash(row["problem"], row["language"], row["sample"])
+                key = (row["problem"], row["language"], row["sample"])
+                if not isinstance(key[2], int):
+                    raise TypeError("sample index must be an integer")
             except (ValueError, KeyError, TypeError):
                 rewrite, dropped = True, dropped + 1
                 continue

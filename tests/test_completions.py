@@ -92,3 +92,15 @@ def test_a_fenced_answer_keeps_only_the_code():
 def test_modes_assemble_prompt_or_preamble():
     assert assemble_code("continue", "P\n", "PRE\n", "body\n#tail", ["\n#"]) == "P\nbody"
     assert assemble_code("whole", "P\n", "PRE\n", "```\ncode\n```", []) == "PRE\ncode"
+
+
+def test_sample_key_set_behaves_like_a_set_of_tuples():
+    from harness.completions import SampleKeySet
+
+    keys = SampleKeySet()
+    reference = set()
+    for key in [("p", "python", 0), ("p", "python", 9), ("q", "lua", 3), ("p", "python", 2**30), ("p", "lua", 9)]:
+        keys.add(key)
+        reference.add(key)
+    probes = reference | {("p", "python", 1), ("q", "lua", 4), ("p", "python", 2**30 + 1), ("z", "go", 0)}
+    assert {k for k in probes if k in keys} == reference
