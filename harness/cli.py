@@ -124,6 +124,11 @@ def score(
                                "verdicts mark it flaky (the first run's verdict is recorded)."),
     cache: Optional[Path] = typer.Option(None, "--cache", help="Folder of verdicts shared across runs and "
                                          "checkpoints: identical programs are executed once."),
+    engine: str = typer.Option("local", "--engine", help="Where candidates run: local (a pool of --jobs "
+                               "workers) or ray (a Ray cluster's nodes; see docs/scale.md)."),
+    address: Optional[str] = typer.Option(None, "--address", help="Ray cluster address (host:port) for "
+                                          "--engine ray; default: RAY_ADDRESS, else the cluster last started here, "
+                                          "else a new Ray instance here."),
     runtimes_dir: Optional[List[Path]] = RuntimesDir,
     as_json: bool = typer.Option(False, "--json", help="Print the summary as JSON."),
     quiet: bool = typer.Option(False, "--quiet", "-q", help="No progress line."),
@@ -131,9 +136,20 @@ def score(
     """Run every completion against the hidden tests; resumable (rerun to finish a stopped run)."""
     from .scoring import ScoreOptions
     from .scoring import score as run_score
+    from .engines_ray import RayEngineError, ray_engine_factory
 
     if mode not in MODES:
         fail(f"--mode must be one of: {', '.join(MODES)}")
+    if engine not in ("local", "ray"):
+        fail(f"--engine must be one of: local, ray (got {engine!r})")
+    if address and engine != "ray":
+        fail("--address is for --engine ray")
+    engine_factory = None
+    if engine == "ray":
+        try:
+            engine_factory = ray_engine_factory(address)
+        except RayEngineError as exc:
+            fail(str(exc))
     for dump in dumps:
         if not dump.is_file():
             fail(f"{dump}: no such file")
@@ -149,8 +165,8 @@ def score(
                            limit_overrides=_limits(timeout, memory), progress=not quiet, label=label,
                            repeat=repeat, cache_dir=cache)
     try:
-        outcome = run_score(options, problem_set, runtimes, box)
-    except (StoreBusy, StoreMismatch) as exc:
+        outcome = run_score(options, problem_set, runtimes, box, engine_factory=engine_factory)
+    except (StoreBusy, StoreMismatch, RayEngineError) as exc:
         fail(str(exc))
     except StoreWriteError as exc:
         fail(str(exc), code=3)
@@ -353,6 +369,10 @@ def runtimes_check(
 from .cli_analysis import register  # noqa: E402  (analysis commands: report, compare, trend)
 
 register(app)
+
+from .cli_sandbox import register as register_sandbox  # noqa: E402  (sandbox clean, runtimes build)
+
+register_sandbox(app)
 
 
 def main() -> None:

@@ -6,7 +6,7 @@ from pathlib import Path
 
 from .base import Limits, RuntimeSandboxNeeds, Sandbox, SandboxUnavailable, StepResult, Workspace
 
-BACKENDS = ("bubblewrap", "none")
+BACKENDS = ("bubblewrap", "docker", "none")
 
 
 def make_sandbox(name: str, work_root: Path | None = None) -> Sandbox:
@@ -14,6 +14,10 @@ def make_sandbox(name: str, work_root: Path | None = None) -> Sandbox:
         from .bubblewrap import BubblewrapSandbox
 
         return BubblewrapSandbox(work_root)
+    if name == "docker":
+        from .docker import DockerSandbox
+
+        return DockerSandbox(work_root)
     if name == "none":
         from .bare import BareSandbox
 

@@ -33,6 +33,7 @@ WORK = "/work"
 SCRATCH = ("/tmp", "/dev/shm")
 KEEP_BYTES = 8192  # output kept for diagnostics, as in harness/sandbox/process.py
 PR_SET_DUMPABLE = 4
+LIBC = ctypes.CDLL(None)
 IGNORED = [s for s in (signal.SIGINT, signal.SIGTERM, signal.SIGHUP, signal.SIGQUIT, signal.SIGUSR1,
                        signal.SIGUSR2, signal.SIGALRM, signal.SIGTSTP, signal.SIGTTIN, signal.SIGTTOU)]
 
@@ -119,10 +120,12 @@ class Supervisor:
             )
         except OSError as exc:
             return {"spawn_error": "cannot start %s: %s" % (argv[0], exc)}
-        out, err, timed_out, flooded = collect(proc, limits, started)
+        out, err, timed_out, flooded, left_running = collect(proc, limits, started)
         wall = time.monotonic() - started
-        left_running = sweep()
+        left_running += sweep()
         after = read_oom_kills(self.oom_files)
+        # Each step gets empty scratch areas, as bubblewrap's fresh tmpfs /tmp per step.
+        residue = [problem for top in SCRATCH for problem in empty_folder(top)]
         return {
             "returncode": proc.returncode,
             "wall": round(wall, 4),
@@ -132,36 +135,17 @@ class Supervisor:
             "flooded": flooded,
             "oom_kills": None if before is None or after is None else after - before,
             "left_running": left_running,
+            "residue": residue[:20],
         }
 
     # --- between candidates --------------------------------------------------------------
     def op_reset(self, req):
-        """Empty the work dir and scratch areas; report anything a candidate put outside
-        the work dir and anything that could not be removed."""
+        """Empty the work dir and the scratch areas for the next candidate. Reports what
+        could not be removed and any state a candidate could leave for the next one outside
+        those folders: processes, System V IPC objects, POSIX message queues."""
         left_running = sweep()
-        outside = []
-        for top in SCRATCH:
-            try:
-                outside += [os.path.join(top, n) for n in os.listdir(top)]
-            except OSError:
-                pass
-        residue = []
-        for top in (WORK,) + SCRATCH:
-            try:
-                os.chmod(top, 0o700 if top == WORK else 0o1777)
-            except OSError:
-                pass
-            try:
-                names = os.listdir(top)
-            except OSError as exc:
-                residue.append("%s: %s" % (top, exc))
-                continue
-            for name in names:
-                try:
-                    remove_tree(os.path.join(top, name))
-                except (OSError, RecursionError) as exc:
-                    residue.append("%s: %s" % (os.path.join(top, name), exc))
-        return {"outside": outside[:20], "residue": residue[:20], "left_running": left_running,
+        residue = [problem for top in (WORK,) + SCRATCH for problem in empty_folder(top)]
+        return {"left_running": left_running, "residue": residue[:20], "ipc": ipc_objects()[:20],
                 "memory_bytes": memory_usage()}
 
     def op_hello(self, req):
@@ -179,7 +163,9 @@ def step_preexec(limits):
         resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
         resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
         resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
-        # The memory cgroup's OOM killer must pick the step, never the supervisor.
+        # Dumpable again (exec would do it anyway), else /proc/self belongs to root. Then the
+        # memory cgroup's OOM killer must pick the step, never the supervisor.
+        LIBC.prctl(PR_SET_DUMPABLE, 1, 0, 0, 0)
         with open("/proc/self/oom_score_adj", "w") as handle:
             handle.write("1000")
 
@@ -188,21 +174,35 @@ def step_preexec(limits):
 
 def collect(proc, limits, started):
     """Read both pipes until EOF, the wall-clock deadline or the output cap (the same rules as
-    the local backends' harness/sandbox/process.py)."""
+    the local backends' harness/sandbox/process.py). When the step's own process ends, whatever
+    it started is killed, as bubblewrap's pid namespace ends with its first process: a
+    detached child holding the pipes open cannot stretch the step. Returns the output, the
+    two flags and how many processes were still running then."""
     deadline = started + float(limits["wall_seconds"])
     cap = int(limits["max_output_kb"]) * 1024
     buffers = {proc.stdout: bytearray(), proc.stderr: bytearray()}
     total = 0
-    timed_out = flooded = False
+    timed_out = flooded = ended = False
+    left_running = 0
+    try:
+        exit_fd = os.pidfd_open(proc.pid)  # readable once the process ends (Linux 5.3)
+    except (AttributeError, OSError):
+        exit_fd = None
     with selectors.DefaultSelector() as selector:
         for stream in buffers:
             selector.register(stream, selectors.EVENT_READ)
+        if exit_fd is not None:
+            selector.register(exit_fd, selectors.EVENT_READ, "exit")
         while selector.get_map():
             remaining = deadline - time.monotonic()
             if remaining <= 0:
                 timed_out = True
                 break
-            for key, _ in selector.select(timeout=min(remaining, 0.5)):
+            for key, _ in selector.select(timeout=min(remaining, 0.5 if exit_fd is not None else 0.05)):
+                if key.data == "exit":
+                    selector.unregister(key.fileobj)
+                    ended = True
+                    continue
                 chunk = os.read(key.fd, 65536)
                 if not chunk:
                     selector.unregister(key.fileobj)
@@ -217,6 +217,15 @@ def collect(proc, limits, started):
                     break
             if flooded:
                 break
+            if exit_fd is None and not ended and proc.poll() is not None:
+                ended = True
+            if ended and proc.returncode is None:
+                proc.wait()  # reaped first, so the sweep cannot take its exit status
+                left_running = sweep()
+            if exit_fd is None and ended and not any(k.data != "exit" for k in selector.get_map().values()):
+                break
+    if exit_fd is not None:
+        os.close(exit_fd)
     if timed_out or flooded:
         kill_group(proc.pid)
     try:
@@ -228,7 +237,7 @@ def collect(proc, limits, started):
     kill_group(proc.pid)
     for stream in buffers:
         stream.close()
-    return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded
+    return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded, left_running
 
 
 def kill_group(pgid):
@@ -277,6 +286,40 @@ def reap():
             return
 
 
+def empty_folder(top):
+    """Remove everything inside ``top``; what could not be removed, as messages."""
+    try:
+        if os.lstat(top).st_uid == os.getuid():
+            os.chmod(top, 0o700 if top == WORK else 0o1777)
+        names = os.listdir(top)
+    except OSError as exc:
+        return ["%s: %s" % (top, exc)]
+    problems = []
+    for name in names:
+        try:
+            remove_tree(os.path.join(top, name))
+        except (OSError, RecursionError) as exc:
+            problems.append("%s: %s" % (os.path.join(top, name), exc))
+    return problems
+
+
+def ipc_objects():
+    """System V shared memory, semaphores and message queues, and POSIX message queues, in
+    this container's IPC namespace (the next candidate would share them)."""
+    found = []
+    for kind in ("shm", "sem", "msg"):
+        try:
+            lines = open("/proc/sysvipc/" + kind).read().splitlines()[1:]
+        except OSError:
+            continue
+        found += ["sysv %s %s" % (kind, line.split()[1]) for line in lines if line.strip()]
+    try:
+        found += ["mqueue " + name for name in os.listdir("/dev/mqueue")]
+    except OSError:
+        pass
+    return found
+
+
 def remove_tree(path):
     info = os.lstat(path)
     if stat.S_ISDIR(info.st_mode):
@@ -289,10 +332,7 @@ def remove_tree(path):
 
 
 def main():
-    try:
-        ctypes.CDLL(None).prctl(PR_SET_DUMPABLE, 0, 0, 0, 0)
-    except (OSError, AttributeError):
-        pass
+    LIBC.prctl(PR_SET_DUMPABLE, 0, 0, 0, 0)
     for sig in IGNORED:
         signal.signal(sig, signal.SIG_IGN)
     supervisor = Supervisor()

@@ -1,0 +1,306 @@
+"""Container images for the Docker sandbox: one per runtime, named after the runtime folder's
+content hash, so editing anything in a runtime (templates, Dockerfile) names a new image and
+a stale one can never be used by mistake.
+
+Each runtime's ``Dockerfile`` (``ARG BASE`` / ``FROM ${BASE}``) installs its toolchain. On top
+of it the engine adds one small layer of its own (``SUPERVISOR_LAYER``): it makes sure the
+image has the ``python3`` the in-container step supervisor runs on and the ``runner`` user
+(uid 10001) every step runs as. Bases: ``debian:bookworm-slim`` from a registry, or, with no
+registry in reach, a local Debian made by debootstrap and imported as ``assay-base:bookworm``.
+"""
+
+from __future__ import annotations
+
+import io
+import os
+import re
+import shutil
+import subprocess
+import tempfile
+import time
+from dataclasses import dataclass
+from pathlib import Path
+from typing import Callable
+
+from ..runtimes import Runtime
+
+DEFAULT_BASE = "debian:bookworm-slim"
+OFFLINE_BASE = "assay-base:bookworm"
+SUITE = "bookworm"
+FALLBACK_MIRROR = "http://deb.debian.org/debian"
+MIRROR_ENV = "ASSAY_DEBIAN_MIRROR"
+APT_SOURCES = (Path("/etc/apt/sources.list"), Path("/etc/apt/sources.list.d"))
+LOCAL_CERTIFICATES = Path("/usr/local/share/ca-certificates")
+RUNNER_UID = 10001
+TAG_HEX = 12
+LABEL_RUNTIME = "assay.runtime"
+LABEL_DIGEST = "assay.runtime-digest"
+
+# Added on top of every runtime's own image. Only installs python3 when the toolchain image
+# lacks the modules the supervisor imports (harness/sandbox/docker_agent.py).
+SUPERVISOR_LAYER = f"""\
+ARG TOOLCHAIN
+FROM ${{TOOLCHAIN}}
+USER root
+RUN if ! python3 -I -S -c "import base64, ctypes, json, resource, selectors, subprocess" 2>/dev/null; then \\
+      apt-get update \\
+      && DEBIAN_FRONTEND=noninteractive apt-get install -y --no-install-recommends python3 \\
+      && rm -rf /var/lib/apt/lists/*; \\
+    fi \\
+ && if [ "$(id -u runner 2>/dev/null)" != "{RUNNER_UID}" ]; then \\
+      echo "the runtime's Dockerfile must create the user runner with uid {RUNNER_UID}" >&2; exit 1; \\
+    fi
+USER {RUNNER_UID}:{RUNNER_UID}
+"""
+
+Log = Callable[[str], None]
+
+
+class ImageError(RuntimeError):
+    """An image could not be found or built; the message says what to run or fix."""
+
+
+@dataclass
+class BuiltImage:
+    runtime: str
+    tag: str
+    id: str
+    built: bool  # False when an image with this tag already existed
+    seconds: float
+
+
+def dockerfile_path(runtime: Runtime) -> Path:
+    return runtime.path / "Dockerfile"
+
+
+def image_tag(runtime: Runtime) -> str:
+    """``assay-<runtime>:<first 12 hex of the runtime folder's content hash>``."""
+    return f"assay-{runtime.name}:{runtime.digest[:TAG_HEX]}"
+
+
+def dockerfile_problems(path: Path) -> list[str]:
+    """What keeps a runtime's Dockerfile from taking the base the engine passes, as
+    ``file:line: message`` strings (empty when it is fine)."""
+    if not path.is_file():
+        return [f"{path}: missing (a runtime needs a Dockerfile for the Docker sandbox)"]
+    problems = []
+    seen_arg = False
+    for number, raw in enumerate(path.read_text(encoding="utf-8").splitlines(), start=1):
+        line = raw.strip()
+        if not line or line.startswith("#"):
+            continue
+        word, _, rest = line.partition(" ")
+        word = word.upper()
+        if word == "ARG" and re.fullmatch(r"BASE(=\S*)?", rest.strip()):
+            seen_arg = True
+        elif word == "FROM":
+            source = rest.split()[0] if rest.split() else ""
+            if source not in ("${BASE}", "$BASE"):
+                problems.append(f"{path}:{number}: the first FROM must be 'FROM ${{BASE}}', not {line!r}")
+            elif not seen_arg:
+                problems.append(f"{path}:{number}: 'ARG BASE' must come before 'FROM ${{BASE}}'")
+            return problems
+    return problems + [f"{path}: no FROM line"]
+
+
+# --- the Debian mirror debootstrap uses --------------------------------------------------------
+
+def parse_one_line_sources(text: str) -> list[tuple[str, list[str]]]:
+    """``deb [options] URI suite components...`` lines as (URI, [suite])."""
+    found = []
+    for raw in text.splitlines():
+        line = raw.split("#", 1)[0].strip()
+        if not line.startswith("deb "):
+            continue
+        line = re.sub(r"\[[^\]]*\]", " ", line[4:])
+        fields = line.split()
+        if len(fields) >= 2:
+            found.append((fields[0], [fields[1]]))
+    return found
+
+
+def parse_deb822_sources(text: str) -> list[tuple[str, list[str]]]:
+    """``.sources`` stanzas (deb822) as (URI, suites) for each URI of each ``deb`` stanza."""
+    found = []
+    for stanza in re.split(r"\n\s*\n", text):
+        fields: dict[str, str] = {}
+        key = None
+        for raw in stanza.splitlines():
+            if raw.startswith("#"):
+                continue
+            if raw[:1] in (" ", "\t") and key:
+                fields[key] += " " + raw.strip()
+                continue
+            key, sep, value = raw.partition(":")
+            if not sep:
+                key = None
+                continue
+            key = key.strip().lower()
+            fields[key] = value.strip()
+        if "deb" not in fields.get("types", "").split() or fields.get("enabled", "yes").lower() == "no":
+            continue
+        suites = fields.get("suites", "").split()
+        found += [(uri, suites) for uri in fields.get("uris", "").split()]
+    return found
+
+
+def debian_mirror(sources: tuple[Path, ...] = APT_SOURCES) -> str:
+    """The host's Debian mirror for bookworm (``ASSAY_DEBIAN_MIRROR`` wins; a host that lists
+    none, e.g. an Ubuntu machine, gets deb.debian.org)."""
+    override = os.environ.get(MIRROR_ENV)
+    if override:
+        return override
+    files: list[Path] = []
+    for source in sources:
+        if source.is_dir():
+            files += sorted(p for p in source.iterdir() if p.suffix in (".list", ".sources"))
+        elif source.is_file():
+            files.append(source)
+    for file in files:
+        try:
+            text = file.read_text(encoding="utf-8")
+        except OSError:
+            continue
+        entries = parse_deb822_sources(text) if file.suffix == ".sources" else parse_one_line_sources(text)
+        for uri, suites in entries:
+            if SUITE in suites:
+                return uri
+    return FALLBACK_MIRROR
+
+
+# --- building ------------------------------------------------------------------------------
+
+def find_image(client, ref: str) -> str | None:
+    """The image id for a tag, or None when there is no such image."""
+    import docker
+
+    try:
+        return client.api.inspect_image(ref)["Id"]
+    except docker.errors.ImageNotFound:
+        return None
+
+
+def ensure_base(client, base: str | None, offline: bool, log: Log) -> str:
+    """The base image to build on, made available locally."""
+    import docker
+
+    if offline:
+        if base and base != OFFLINE_BASE:
+            raise ImageError("--base and --offline-base exclude each other: the offline base is "
+                             f"always {OFFLINE_BASE}")
+        if find_image(client, OFFLINE_BASE) is None:
+            build_offline_base(client, log)
+        else:
+            log(f"base: reusing {OFFLINE_BASE}")
+        return OFFLINE_BASE
+    base = base or DEFAULT_BASE
+    if find_image(client, base) is None:
+        log(f"base: pulling {base}")
+        repository, _, tag = base.rpartition(":") if ":" in base.split("/")[-1] else (base, "", "latest")
+        try:
+            client.images.pull(repository, tag=tag)
+        except docker.errors.DockerException as exc:
+            raise ImageError(f"cannot pull the base image {base}: {_first_line(exc)}. Without a registry, "
+                             "use --offline-base to build a local Debian base with debootstrap.") from None
+    return base
+
+
+def build_offline_base(client, log: Log) -> str:
+    """debootstrap a minimal bookworm and import it as ``assay-base:bookworm``."""
+    if os.geteuid() != 0:
+        raise ImageError("--offline-base runs debootstrap, which needs root")
+    debootstrap = shutil.which("debootstrap")
+    if debootstrap is None:
+        raise ImageError("--offline-base needs debootstrap; on Debian/Ubuntu: apt-get install debootstrap")
+    mirror = debian_mirror()
+    started = time.monotonic()
+    with tempfile.TemporaryDirectory(prefix="assay-rootfs-") as scratch:
+        root = Path(scratch) / "root"
+        log(f"base: debootstrap --variant=minbase {SUITE} from {mirror}")
+        done = subprocess.run([debootstrap, "--variant=minbase", SUITE, str(root), mirror],
+                              capture_output=True, text=True)
+        if done.returncode != 0:
+            tail = "\n".join((done.stdout + done.stderr).strip().splitlines()[-15:])
+            raise ImageError(f"debootstrap failed (exit {done.returncode}):\n{tail}")
+        for leftover in ("var/cache/apt/archives", "var/lib/apt/lists"):
+            for item in (root / leftover).glob("*"):
+                if item.is_file():
+                    item.unlink()
+        copied = copy_local_certificates(root)
+        if copied:
+            log(f"base: with this host's local CA certificates ({', '.join(copied)})")
+        tar = subprocess.Popen(["tar", "--numeric-owner", "-C", str(root), "-c", "."], stdout=subprocess.PIPE)
+        try:
+            repository, tag = OFFLINE_BASE.split(":")
+            client.api.import_image(src=tar.stdout, repository=repository, tag=tag, stream_src=True,
+                                    changes=["ENV PATH=/usr/local/sbin:/usr/local/bin:/usr/sbin:/usr/bin:/sbin:/bin"])
+        finally:
+            tar.stdout.close()
+            tar.wait()
+        if tar.returncode != 0:
+            raise ImageError(f"packing the debootstrap tree failed (tar exit {tar.returncode})")
+    log(f"base: {OFFLINE_BASE} imported in {time.monotonic() - started:.0f}s")
+    return OFFLINE_BASE
+
+
+def copy_local_certificates(root: Path, source: Path = LOCAL_CERTIFICATES) -> list[str]:
+    """Copy the certificates this host added to its trust store into the new root's
+    ``/usr/local/share/ca-certificates``. Debian's ca-certificates package adds them to the
+    image's store when a Dockerfile installs it, so a build behind a TLS-inspecting proxy
+    trusts what the host trusts (sandboxes themselves have no network)."""
+    if not source.is_dir():
+        return []
+    target = root / "usr" / "local" / "share" / "ca-certificates"
+    target.mkdir(parents=True, exist_ok=True)
+    copied = []
+    for cert in sorted(source.rglob("*.crt")):
+        destination = target / cert.relative_to(source)
+        destination.parent.mkdir(parents=True, exist_ok=True)
+        shutil.copyfile(cert, destination)
+        copied.append(str(cert.relative_to(source)))
+    return copied
+
+
+def build_runtime_image(client, runtime: Runtime, base: str, log: Log, rebuild: bool = False) -> BuiltImage:
+    """Build ``runtime``'s image on ``base`` (skipped when its tag already exists)."""
+    tag = image_tag(runtime)
+    started = time.monotonic()
+    existing = find_image(client, tag)
+    if existing and not rebuild:
+        return BuiltImage(runtime.name, tag, existing, False, 0.0)
+    problems = dockerfile_problems(dockerfile_path(runtime))
+    if problems:
+        raise ImageError("\n".join(problems))
+    labels = {LABEL_RUNTIME: runtime.name, LABEL_DIGEST: runtime.digest}
+    toolchain = f"{tag}-toolchain"
+    _stream_build(client, log, runtime.name, path=str(runtime.path), tag=toolchain,
+                  buildargs={"BASE": base}, labels=labels)
+    _stream_build(client, log, runtime.name, fileobj=io.BytesIO(SUPERVISOR_LAYER.encode()), tag=tag,
+                  buildargs={"TOOLCHAIN": toolchain}, labels=labels)
+    image_id = find_image(client, tag)
+    if image_id is None:
+        raise ImageError(f"{runtime.name}: the build finished but {tag} is missing")
+    return BuiltImage(runtime.name, tag, image_id, True, round(time.monotonic() - started, 1))
+
+
+def _stream_build(client, log: Log, name: str, **kwargs) -> None:
+    lines: list[str] = []
+    try:
+        for event in client.api.build(network_mode="host", rm=True, forcerm=True, pull=False, decode=True, **kwargs):
+            if "error" in event:
+                tail = "\n".join(lines[-15:])
+                raise ImageError(f"{name}: image build failed: {event['error'].strip()}\n{tail}")
+            text = (event.get("stream") or "").rstrip()
+            if text:
+                lines.append(text)
+                if text.startswith("Step "):
+                    log(f"{name}: {text}")
+    except ImageError:
+        raise
+    except Exception as exc:  # the daemon went away or refused the request
+        raise ImageError(f"{name}: the Docker daemon failed during the build: {_first_line(exc)}") from None
+
+
+def _first_line(exc: Exception) -> str:
+    text = str(exc).strip()
+    return text.splitlines()[0] if text else type(exc).__name__
