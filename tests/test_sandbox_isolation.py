@@ -95,3 +95,24 @@ def test_the_work_dir_is_removed_after_the_candidate(sandbox):
     result, space = run_python(sandbox, "open('left.txt', 'w').write('x')")
     assert result.exit_code == 0
     assert not space.path.exists()
+
+
+def test_a_cpu_limit_kill_is_a_timeout_and_a_file_size_kill_an_output_limit(sandbox):
+    # Killed by SIGXCPU before the wall clock runs out: bubblewrap reports it as status 128 + n.
+    with sandbox.workspace(NEEDS) as space:
+        busy = space.run(["sh", "-c", "while :; do :; done"], Limits(wall_seconds=20, cpu_seconds=1), {})
+        assert busy.timed_out and busy.wall_seconds < 15
+        big = space.run(["dd", "if=/dev/zero", "of=big", "bs=1M", "count=64"], Limits(max_file_mb=4), {})
+        assert big.file_size_exceeded
+
+
+def test_a_fifo_in_place_of_the_results_file_does_not_hang_the_harness(sandbox):
+    with sandbox.workspace(NEEDS) as space:
+        space.run(["mkfifo", "results.jsonl"], LIMITS, {})
+        assert space.read("results.jsonl", 1024) is None
+
+
+def test_a_runtime_command_missing_from_the_system_is_an_infra_error(sandbox):
+    with sandbox.workspace(NEEDS) as space:
+        result = space.run(["no-such-compiler-xyz", "main.c"], LIMITS, {})
+        assert result.infra_error and "not found" in result.infra_error

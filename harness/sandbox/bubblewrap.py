@@ -31,6 +31,11 @@ class BubblewrapWorkspace(LocalWorkspace):
         self.needs = needs
 
     def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:
+        # A runtime command missing from the system is the machine's fault, not the candidate's.
+        # (Programs the compile step builds, like ./main, are looked up by the kernel.)
+        path = candidate_env(self.needs, env, home=WORK_DIR, tmp="/tmp")["PATH"]
+        if "/" not in argv[0] and shutil.which(argv[0], path=path) is None:
+            return StepResult(exit_code=None, infra_error=f"{argv[0]}: command not found in the sandbox (PATH={path})")
         command = self.sandbox.bwrap_argv(self.path, self.needs, env)
         command += ["--json-status-fd", STATUS_FD, "--"] + argv
         result = run_limited(
@@ -41,6 +46,7 @@ class BubblewrapWorkspace(LocalWorkspace):
             cgroups=self.sandbox.cgroups,
             user=self.sandbox.run_as,
             status_fd_placeholder=STATUS_FD,
+            exit_codes_encode_signals=True,
         )
         # bubblewrap reports the child's pid once the sandbox is up; without it, the sandbox
         # itself failed and the candidate never ran.

@@ -6,6 +6,7 @@ from __future__ import annotations
 import contextlib
 import os
 import shutil
+import stat
 import tempfile
 from pathlib import Path
 
@@ -43,11 +44,14 @@ class LocalWorkspace:
     def read(self, name: str, max_bytes: int) -> bytes | None:
         target = self.path / name
         try:
-            # O_NOFOLLOW: a candidate could replace the file with a link to a host file.
-            fd = os.open(target, os.O_RDONLY | os.O_NOFOLLOW)
+            # O_NOFOLLOW: a candidate could replace the file with a link to a host file;
+            # O_NONBLOCK: or with a FIFO nobody writes to, which would block the read forever.
+            fd = os.open(target, os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK)
         except OSError:
             return None
         with os.fdopen(fd, "rb") as handle:
+            if not stat.S_ISREG(os.fstat(fd).st_mode):
+                return None
             return handle.read(max_bytes)
 
     def remove(self) -> None:

@@ -29,12 +29,15 @@ def run_limited(
     user: int | None = None,
     memory_rlimit: bool = True,
     status_fd_placeholder: str | None = None,
+    exit_codes_encode_signals: bool = False,
 ) -> StepResult:
     """Run ``argv`` to completion or until a limit is hit, and say which limit ended it.
 
     With ``status_fd_placeholder``, that argument of ``argv`` is replaced by the number of a
     pipe the wrapper (bubblewrap) reports its own status on; the text lands in
     ``extra["wrapper_status"]``, so a wrapper failure is told apart from the candidate's.
+    With ``exit_codes_encode_signals``, an exit status above 128 means death by signal
+    (status - 128), as wrappers such as bubblewrap report it.
     """
     group: Cgroup | None = None
     memory_bytes = limits.memory_mb * 1024 * 1024
@@ -74,6 +77,8 @@ def run_limited(
         out, err, timed_out, flooded = _collect(proc, limits, started)
         wall = time.monotonic() - started
         returncode = proc.returncode
+        if exit_codes_encode_signals and returncode > 128:
+            returncode = -(returncode - 128)
         result = StepResult(
             exit_code=returncode if returncode >= 0 else None,
             signal=-returncode if returncode < 0 else None,
