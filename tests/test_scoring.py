@@ -232,3 +232,18 @@ def test_repeat_marks_candidates_whose_verdicts_disagree_as_flaky(tmp_path, tiny
     assert saved[0]["flaky"] is False and saved[0]["repeat_outcomes"] == ["passed"] * 12
     assert saved[1]["flaky"] is True and set(saved[1]["repeat_outcomes"]) == {"passed", "wrong_answer"}
     assert json.loads((out / "summary.json").read_text())["flaky"] == {"python": 1}
+
+
+def test_two_runs_writing_one_cache_folder_at_once_both_finish_with_the_same_verdicts(tmp_path, tiny_set):
+    cache = tmp_path / "cache"
+    rows = [{"problem": "add_pair", "language": "python", "completion": f"    return a + b + {i % 3} - {i % 3}\n"}
+            for i in range(12)]
+    dumps = [write_dump(tmp_path / f"{name}.jsonl", rows) for name in ("a", "b")]
+    runs = [subprocess.Popen(ASSAY + ["score", str(dump), "--set", str(tiny_set), "--out", str(tmp_path / dump.stem),
+                                      "-q", "--cache", str(cache)], stderr=subprocess.PIPE, text=True)
+            for dump in dumps]
+    for run in runs:
+        _, stderr = run.communicate(timeout=300)
+        assert run.returncode == 0, stderr
+    assert verdict_set(tmp_path / "a") == verdict_set(tmp_path / "b")
+    assert {r["outcome"] for r in read_rows(tmp_path / "a")} == {"passed"}
