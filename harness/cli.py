@@ -16,7 +16,7 @@ from .problems import ProblemError, ProblemSet, load_problem_set
 from .report import pass_table
 from .runtimes import RuntimeConfigError, Runtime, available_runtimes, load_runtime
 from .sandbox import BACKENDS, SandboxUnavailable, make_sandbox
-from .store import SUMMARY, StoreBusy, StoreMismatch, StoreWriteError
+from .store import StoreBusy, StoreMismatch, StoreWriteError
 from .tables import paint, render, use_colour
 
 app = typer.Typer(add_completion=False, no_args_is_help=True, help=(
@@ -61,6 +61,10 @@ def _make_sandbox(name: str, work_root: Optional[Path] = None):
         typer.echo(paint("warning: --sandbox none runs candidates with no isolation at all; "
                          "use it only with code you trust.", "33", use_colour(sys.stderr)), err=True)
     return sandbox
+
+
+def _check_mark(ok: bool, colour: bool) -> str:
+    return paint("ok  ", "32", colour) if ok else paint("FAIL", "31", colour)
 
 
 def _limits(timeout: Optional[float], memory: Optional[int]) -> dict:
@@ -252,7 +256,7 @@ def problems_check(
     else:
         colour = use_colour()
         for r in results:
-            mark = paint("ok  ", "32", colour) if r["outcome"] == "passed" else paint("FAIL", "31", colour)
+            mark = _check_mark(r["outcome"] == "passed", colour)
             typer.echo(f"{mark} {r['problem']} [{r['language']}]" + (f": {r['outcome']}: {r['detail']}"
                                                                      if r["outcome"] != "passed" else ""))
         typer.echo(f"{problem_set.name}: {len(problem_set)} problems, {len(results)} reference checks, "
@@ -356,7 +360,7 @@ def runtimes_check(
         colour = use_colour()
         for name, rows in report_rows.items():
             for r in rows:
-                mark = paint("ok  ", "32", colour) if r["ok"] else paint("FAIL", "31", colour)
+                mark = _check_mark(r["ok"], colour)
                 line = f"{mark} {name}: {r['check']} -> {r['outcome']}"
                 if not r["ok"]:
                     line += f" (expected {r['expect']}): {r['detail']}"

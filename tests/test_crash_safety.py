@@ -4,7 +4,6 @@ import errno
 import json
 import signal
 import subprocess
-import sys
 import time
 
 import pytest

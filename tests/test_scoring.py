@@ -1,7 +1,6 @@
 """End to end through the CLI: scoring, rejects, resume after a crash, locking, reports."""
 
 import json
-import os
 import signal
 import subprocess
 import sys
@@ -77,7 +76,10 @@ def test_malformed_lines_go_to_rejects_and_the_rest_is_scored(tmp_path, tiny_set
 
 
 def test_a_killed_run_resumed_gives_the_same_verdicts_without_loss_or_duplicates(tmp_path, tiny_set):
-    dump = write_dump(tmp_path / "ckpt.jsonl", mixed_rows(40))
+    # Distinct programs (an indented comment each), so verdicts arrive one by one rather than in
+    # bursts of shared rows, and the kill lands part-way.
+    rows = [dict(r, completion=r["completion"] + f"    # variant {i}\n") for i, r in enumerate(mixed_rows(40))]
+    dump = write_dump(tmp_path / "ckpt.jsonl", rows)
     reference = tmp_path / "uninterrupted"
     assay("score", dump, "--set", tiny_set, "--out", reference, "-q", "-j", "2")
 
