@@ -159,7 +159,7 @@ def test_the_supervisor_fits_in_one_command_line_argument():
     # It travels as `python3 -c SOURCE`; Linux caps one argument at MAX_ARG_STRLEN, 32 pages
     # = 131072 bytes (include/uapi/linux/binfmts.h).
     assert len(docker_backend.AGENT_SOURCE.encode()) < 131072
-    compile(docker_backend.AGENT_SOURCE, "docker_agent.py", "exec")
+    compile(docker_backend.AGENT_SOURCE, "step_supervisor.py", "exec")
 
 
 def run_cli(*args):

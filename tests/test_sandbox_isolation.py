@@ -7,7 +7,7 @@ import time
 
 import pytest
 
-from harness.sandbox import Limits, RuntimeSandboxNeeds
+from harness.sandbox import Limits, RuntimeSandboxNeeds, make_sandbox
 
 NEEDS = RuntimeSandboxNeeds("python")
 LIMITS = Limits(wall_seconds=10, cpu_seconds=10)
@@ -91,10 +91,98 @@ def test_fork_bombs_hit_the_process_cap(sandbox):
     assert not result.timed_out
 
 
-def test_the_work_dir_is_removed_after_the_candidate(sandbox):
-    result, space = run_python(sandbox, "open('left.txt', 'w').write('x')")
-    assert result.exit_code == 0
-    assert not space.path.exists()
+# --- the warm sandbox: one bubblewrap launch serves many candidates, one at a time ---------
+
+@pytest.fixture
+def one_slot():
+    """A sandbox of its own, so the tests below know which warm sandbox a candidate gets."""
+    box = make_sandbox("bubblewrap")
+    box.check()
+    yield box
+    box.close()
+
+
+def slot_of(sandbox, code: str, limits: Limits = LIMITS):
+    result, space = run_python(sandbox, code, limits)
+    return result, space.slot
+
+
+def test_the_next_candidate_finds_work_tmp_and_shm_empty(one_slot):
+    leave = ("import os\nfor d in ('.', '/tmp', '/dev/shm'):\n"
+             "    open(os.path.join(d, 'left.txt'), 'w').write('x')\n"
+             "os.mkdir('sub'); os.chmod('sub', 0)\n")
+    first, slot = slot_of(one_slot, leave)
+    assert first.exit_code == 0, first.stderr
+    look = "import os\nprint([sorted(os.listdir(d)) for d in ('.', '/tmp', '/dev/shm')])"
+    second, again = slot_of(one_slot, look)
+    assert again is slot  # the same warm sandbox served both
+    assert second.stdout.strip() == "[['probe.py'], [], []]"
+
+
+def test_dev_is_read_only(one_slot):
+    result, _ = run_python(one_slot, "open('/dev/planted', 'w')")
+    assert "Read-only file system" in result.stderr
+
+
+def test_the_supervisor_cannot_be_killed_or_traced_by_the_candidate(one_slot):
+    code = ("import os, signal\n"
+            "for sig in (signal.SIGKILL, signal.SIGTERM, signal.SIGSTOP):\n"
+            "    os.kill(1, sig)\n"
+            "for name in ('environ', 'mem', 'fd'):\n"
+            "    try:\n        os.listdir('/proc/1/fd') if name == 'fd' else open('/proc/1/' + name, 'rb').read(1)\n"
+            "        print('OPENED', name)\n"
+            "    except OSError as e:\n        print('no', name)\n")
+    first, slot = slot_of(one_slot, code)
+    assert "OPENED" not in first.stdout and first.stdout.count("no") == 3, first.stdout + first.stderr
+    second, again = slot_of(one_slot, "print('alive')")
+    assert again is slot and second.stdout.strip() == "alive"
+
+
+@pytest.mark.parametrize("code, limits", [
+    ("while True: pass", Limits(wall_seconds=1, cpu_seconds=1)),
+    ("x = bytearray(600 * 1024 * 1024)", Limits(memory_mb=128)),
+    ("import subprocess\nsubprocess.Popen(['sleep', '30'], start_new_session=True)", LIMITS),
+    ("import ctypes\nprint(ctypes.CDLL(None).shmget(0, 4096, 0o1600))", LIMITS),  # IPC_PRIVATE, IPC_CREAT
+    ("import ctypes, os\nrt = ctypes.CDLL('librt.so.1')\nprint(rt.mq_open(b'/left', os.O_CREAT | os.O_RDWR, 0o600, None))",
+     LIMITS),
+], ids=["timeout", "memory", "process-left-running", "sysv-shared-memory", "posix-message-queue"])
+def test_a_sandbox_is_retired_after_a_candidate_that_spoils_it(one_slot, code, limits):
+    _, slot = slot_of(one_slot, code, limits)
+    result, fresh = slot_of(one_slot, "print('ok')")
+    assert fresh is not slot and result.stdout.strip() == "ok"
+    assert slot.process.wait(timeout=10) is not None  # the old sandbox is gone
+
+
+def test_a_sandbox_is_retired_after_its_run_allowance():
+    box = make_sandbox("bubblewrap")
+    box.max_runs = 2
+    try:
+        slots = [slot_of(box, "print(1)")[1] for _ in range(3)]
+    finally:
+        box.close()
+    assert slots[0] is slots[1] and slots[2] is not slots[0]
+
+
+def test_closing_the_sandbox_ends_every_warm_sandbox_and_removes_its_folders():
+    box = make_sandbox("bubblewrap")
+    box.check()
+    box.warm(NEEDS, 3)
+    processes = [slot.process for pool in box.pools.values() for slot in pool.idle]
+    assert len(processes) == 3
+    box.close()
+    assert all(p.wait(timeout=10) is not None for p in processes)
+    assert not box.work_root.exists()
+
+
+def test_a_lost_supervisor_is_an_infra_error_and_the_sandbox_is_replaced(one_slot):
+    with one_slot.workspace(NEEDS) as space:
+        os.killpg(space.slot.process.pid, 9)  # from the host: the candidate cannot
+        space.slot.process.wait(timeout=10)
+        result = space.run(["python3", "-c", "print(1)"], LIMITS, {})
+        assert result.infra_error and "bubblewrap sandbox" in result.infra_error
+        lost = space.slot
+    after, fresh = slot_of(one_slot, "print('ok')")
+    assert fresh is not lost and after.stdout.strip() == "ok"
 
 
 def test_a_cpu_limit_kill_is_a_timeout_and_a_file_size_kill_an_output_limit(sandbox):

@@ -9,13 +9,13 @@ from __future__ import annotations
 from pathlib import Path
 
 from .base import Limits, RuntimeSandboxNeeds, StepResult
-from .local import LocalSandbox, LocalWorkspace, candidate_env
+from .local import LocalSandbox, LocalWorkspace, candidate_env, private_folder
 from .process import run_limited
 
 
 class BareWorkspace(LocalWorkspace):
     def __init__(self, sandbox: "BareSandbox", needs: RuntimeSandboxNeeds):
-        super().__init__(sandbox.work_root, owner=None)
+        super().__init__(private_folder(sandbox.work_root, None), owner=None)
         self.needs = needs
 
     def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:

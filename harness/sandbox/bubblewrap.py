@@ -1,77 +1,143 @@
 """The embedded default sandbox: bubblewrap namespaces plus cgroup/rlimit resource limits.
 
-Each step runs in fresh namespaces (no network, own pid namespace so nothing outlives it,
-own IPC/UTS), with the system bound read-only, only the candidate's work dir writable, a clean
-environment, and, when Assay runs as root, as the unprivileged ``nobody`` user.
+Each worker keeps a warm sandbox: one bubblewrap launch (no network, own pid, IPC, UTS, cgroup
+and user namespaces; the system bound read-only; only ``/work``, ``/tmp`` and ``/dev/shm``
+writable; a clean environment; as the unprivileged ``nobody`` user when Assay runs as root)
+whose pid 1 is the step supervisor (``step_supervisor.py``, as in the Docker backend). Why warm:
+building the namespaces and mounts costs about ten milliseconds per launch, as much as a whole
+Python candidate; the supervisor starts a step with a plain fork/exec.
+
+Between candidates the supervisor empties ``/work`` and after every step ``/tmp`` and
+``/dev/shm``; ``/dev`` itself is read-only. The sandbox is thrown away (and a fresh one
+started in the background) after a timeout, a memory kill, anything a candidate leaves
+behind (processes, files that cannot be removed, IPC objects), and after
+``ASSAY_BWRAP_MAX_RUNS`` candidates (default 50). The sandbox's cgroup takes each step's
+memory and process limits (plus an allowance for the supervisor) just before the step runs.
 """
 
 from __future__ import annotations
 
+import atexit
+import concurrent.futures as futures
+import contextlib
 import os
 import shutil
+import signal
 import subprocess
+import sys
+import threading
+import time
+from dataclasses import dataclass
 from pathlib import Path
 
 from . import cgroups
 from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
-from .local import LocalSandbox, LocalWorkspace, candidate_env
-from .process import run_limited
+from .cgroups import Cgroup
+from .local import BASE_PATH, LocalSandbox, LocalWorkspace, candidate_env, private_folder
+from .process import join_and_drop, run_limited
+from .supervised import (
+    AGENT_SOURCE,
+    HELLO_SECONDS,
+    STEP_GRACE_SECONDS,
+    Member,
+    PipeChannel,
+    SupervisorTrouble,
+    WarmPool,
+    brief,
+    max_runs_from_env,
+    memory_killed,
+    read_run_reply,
+    run_request,
+)
 
 NOBODY = 65534
 BASE_RO_BINDS = ("/usr", "/etc/ld.so.cache", "/etc/alternatives", "/etc/localtime")
 TOP_LEVEL_LINKS = ("/bin", "/lib", "/lib64", "/lib32", "/sbin")
 WORK_DIR = "/work"
-STATUS_FD = "{status-fd}"
+MAX_RUNS_ENV = "ASSAY_BWRAP_MAX_RUNS"
+# The supervisor (a Python process, ~10 MB) and bubblewrap's own process share the sandbox's
+# cgroup with the step: the group gets this much memory and two processes on top of its limits.
+SUPERVISOR_MB = 16
+SUPERVISOR_PROCESSES = 2
+
+
+@dataclass(kw_only=True)
+class Slot(Member):
+    """One warm bubblewrap sandbox: its process, the host folder behind ``/work``, its cgroup
+    and the limits in force there."""
+
+    process: subprocess.Popen
+    folder: Path
+    cgroup: Cgroup | None
+    memory: int = 0
+    processes: int = 0
 
 
 class BubblewrapWorkspace(LocalWorkspace):
-    def __init__(self, sandbox: "BubblewrapSandbox", needs: RuntimeSandboxNeeds):
-        super().__init__(sandbox.work_root, sandbox.run_as)
+    """``/work`` of one checked-out warm sandbox: files go straight to its host folder; steps
+    go to its supervisor."""
+
+    def __init__(self, sandbox: "BubblewrapSandbox", slot: Slot, needs: RuntimeSandboxNeeds):
+        super().__init__(slot.folder, sandbox.run_as)
         self.sandbox = sandbox
+        self.slot = slot
         self.needs = needs
 
     def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:
         # A runtime command missing from the system is the machine's fault, not the candidate's.
         # (Programs the compile step builds, like ./main, are looked up by the kernel.)
-        path = candidate_env(self.needs, env, home=WORK_DIR, tmp="/tmp")["PATH"]
-        if "/" not in argv[0] and shutil.which(argv[0], path=path) is None:
-            return StepResult(exit_code=None, infra_error=f"{argv[0]}: command not found in the sandbox (PATH={path})")
-        command = self.sandbox.bwrap_argv(self.path, self.needs, env)
-        command += ["--json-status-fd", STATUS_FD, "--"] + argv
-        result = run_limited(
-            command,
-            cwd=str(self.path),
-            env={"PATH": "/usr/bin:/bin"},
-            limits=limits,
-            cgroups=self.sandbox.cgroups,
-            user=self.sandbox.run_as,
-            status_fd_placeholder=STATUS_FD,
-            exit_codes_encode_signals=True,
-        )
-        # bubblewrap reports the child's pid once the sandbox is up; without it, the sandbox
-        # itself failed and the candidate never ran.
-        if "child-pid" not in result.extra.pop("wrapper_status", "") and not result.timed_out:
-            reason = result.stderr.strip()[-300:] or f"exit status {result.exit_code}"
-            result.infra_error = f"bubblewrap could not start the sandbox: {reason}"
+        merged = candidate_env(self.needs, env, home=WORK_DIR, tmp="/tmp")
+        if "/" not in argv[0] and shutil.which(argv[0], path=merged["PATH"]) is None:
+            return StepResult(exit_code=None,
+                              infra_error=f"{argv[0]}: command not found in the sandbox (PATH={merged['PATH']})")
+        slot, group = self.slot, self.slot.cgroup
+        started = time.monotonic()
+        try:
+            oom_before, baseline = self.sandbox.fit_limits(slot, limits)
+            reply = slot.channel.call(
+                run_request(argv, merged, limits, rlimit_memory=group is None,
+                            rlimit_processes=group is None or not group.limits_processes),
+                limits.wall_seconds + STEP_GRACE_SECONDS)
+        except (SupervisorTrouble, OSError) as exc:
+            slot.spoiled = f"supervisor lost: {brief(exc)}"
+            if group is not None and group.oom_kills() > oom_before:
+                return memory_killed(started)  # the step took the supervisor down with it
+            return StepResult(exit_code=None, wall_seconds=round(time.monotonic() - started, 4),
+                              infra_error=f"bubblewrap sandbox: {exc}"[:500])
+        if group is not None:
+            reply["oom_kills"] = group.oom_kills() - oom_before
+        result, spoiled = read_run_reply(reply, limits)
+        slot.spoiled = slot.spoiled or spoiled
+        if group is not None and group.version == 1:  # v2 cannot restart its peak reading
+            result.extra["peak_memory_mb"] = round(max(0, group.peak_bytes() - baseline) / 2**20, 1)
         return result
 
 
 class BubblewrapSandbox(LocalSandbox):
     name = "bubblewrap"
-    workspace_class = BubblewrapWorkspace
 
-    def __init__(self, work_root: Path | None = None):
+    def __init__(self, work_root: Path | None = None, *, max_runs: int | None = None):
         super().__init__(work_root, "assay-work-")
+        os.chmod(self.work_root, 0o711)  # the sandbox user passes through to its own folder
         self.bwrap = shutil.which("bwrap")
         self.run_as = NOBODY if os.geteuid() == 0 else None
         self.cgroups = cgroups.detect()
+        self.max_runs = max_runs if max_runs is not None else max_runs_from_env(MAX_RUNS_ENV)
+        self.pools: dict[RuntimeSandboxNeeds, WarmPool] = {}
+        self.closed = False
+        self._lock = threading.Lock()
+        self._executor = futures.ThreadPoolExecutor(max_workers=2, thread_name_prefix="assay-bwrap")
+        # Every sandbox is launched from this one thread, which lives until close(): bubblewrap's
+        # --die-with-parent ties a sandbox to the thread that started it, not to the process.
+        self._launcher = futures.ThreadPoolExecutor(max_workers=1, thread_name_prefix="assay-bwrap-launch")
+        atexit.register(self.close)
 
+    # -- protocol --
     def check(self) -> None:
         if not self.bwrap:
             raise SandboxUnavailable(
                 "bubblewrap (bwrap) is not installed; on Debian/Ubuntu: apt-get install bubblewrap"
             )
-        os.chmod(self.work_root, 0o711)
         probe = run_limited(
             self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}) + ["--", "/bin/true"],
             cwd=str(self.work_root),
@@ -86,6 +152,21 @@ class BubblewrapSandbox(LocalSandbox):
                 + (probe.infra_error or probe.stderr.strip()[:300] or f"exit {probe.exit_code}")
             )
 
+    @contextlib.contextmanager
+    def workspace(self, needs: RuntimeSandboxNeeds):
+        pool = self.pool_for(needs)
+        try:
+            slot = pool.acquire()
+        except (SupervisorTrouble, OSError) as exc:
+            raise RuntimeError(f"cannot start a bubblewrap sandbox: {brief(exc)}") from None
+        try:
+            yield BubblewrapWorkspace(self, slot, needs)
+        except BaseException:
+            slot.spoiled = slot.spoiled or "the candidate's handling was interrupted"
+            raise
+        finally:
+            pool.release(slot)
+
     def describe(self) -> dict:
         version = subprocess.run([self.bwrap, "--version"], capture_output=True, text=True).stdout.strip()
         return {
@@ -93,17 +174,126 @@ class BubblewrapSandbox(LocalSandbox):
             "version": version,
             "memory_limit": self.cgroups.describe() if self.cgroups else "rlimit (RLIMIT_AS)",
             "user": "nobody" if self.run_as == NOBODY else "invoking user",
+            "isolation": ("warm sandbox per worker: network, pid, IPC, UTS, cgroup and user namespaces; "
+                          "read-only system; /work, /tmp and /dev/shm emptied between candidates"),
+            "supervisor": "pid-1 step supervisor (harness/sandbox/step_supervisor.py) on the host's python3",
+            "max_runs_per_sandbox": self.max_runs,
         }
 
-    def bwrap_argv(self, work: Path, needs: RuntimeSandboxNeeds, env: dict[str, str]) -> list[str]:
+    def warm(self, needs: RuntimeSandboxNeeds, count: int) -> None:
+        """Start ``count`` sandboxes for a runtime ahead of its first candidates."""
+        self.pool_for(needs).warm(count)
+
+    def close(self) -> None:
+        with self._lock:
+            if self.closed:
+                return
+            self.closed = True
+        for pool in list(self.pools.values()):
+            for slot in pool.drain():
+                self.discard(slot)
+        self._executor.shutdown(wait=True)
+        self._launcher.shutdown(wait=True)
+        super().close()
+        with contextlib.suppress(Exception):
+            atexit.unregister(self.close)
+
+    # -- warm sandboxes --
+    def pool_for(self, needs: RuntimeSandboxNeeds) -> WarmPool:
+        with self._lock:
+            pool = self.pools.get(needs)
+            if pool is None:
+                pool = self.pools[needs] = WarmPool(self, lambda: self.start_slot(needs))
+            return pool
+
+    def start_slot(self, needs: RuntimeSandboxNeeds) -> Slot:
+        if self.closed:
+            raise SupervisorTrouble("the sandbox was closed")
+        folder = private_folder(self.work_root, self.run_as, prefix="slot-")
+        limits = Limits()
+        memory, processes = self._group_limits(limits)
+        group = None
+        try:
+            if self.cgroups is not None:
+                group = self.cgroups.create(memory, processes)
+            python, extra_binds = supervisor_python()
+            argv = self.bwrap_argv(folder, needs, {}, extra_binds)
+            argv += ["--as-pid-1", "--", python, "-I", "-S", "-B", "-c", AGENT_SOURCE]
+            process = self._launcher.submit(
+                subprocess.Popen, argv, cwd=str(folder), env={"PATH": "/usr/bin:/bin"}, stdin=subprocess.PIPE,
+                stdout=subprocess.PIPE, stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
+                preexec_fn=join_and_drop(group, self.run_as),
+            ).result()
+        except BaseException:
+            if group is not None:
+                group.remove()
+            shutil.rmtree(folder, ignore_errors=True)
+            raise
+        slot = Slot(channel=PipeChannel(process.stdin, process.stdout, process.stderr), process=process,
+                    folder=folder, cgroup=group, memory=memory, processes=processes)
+        try:
+            hello = slot.channel.call({"op": "hello"}, HELLO_SECONDS)
+            if hello["pid"] != 1:
+                raise SupervisorTrouble(f"the supervisor runs as pid {hello['pid']}, not 1")
+        except BaseException:
+            self.discard(slot)
+            raise
+        return slot
+
+    def fit_limits(self, slot: Slot, limits: Limits) -> tuple[int, int]:
+        """Give the sandbox's cgroup the step's limits and restart its peak reading; returns
+        the group's memory-kill count so far and the memory in use before the step (the
+        supervisor's own), both 0 without a cgroup."""
+        group = slot.cgroup
+        if group is None:
+            return 0, 0
+        memory, processes = self._group_limits(limits)
+        if (memory, processes) != (slot.memory, slot.processes):
+            group.set_limits(memory, processes, old_memory=slot.memory)
+            slot.memory, slot.processes = memory, processes
+        group.reset_peak()
+        return group.oom_kills(), group.usage_bytes()
+
+    @staticmethod
+    def _group_limits(limits: Limits) -> tuple[int, int]:
+        return (limits.memory_mb + SUPERVISOR_MB) * 2**20, limits.max_processes + SUPERVISOR_PROCESSES
+
+    def discard(self, slot: Slot) -> None:
+        """End a sandbox at once (killing bubblewrap's process takes its pid 1, and so the whole
+        pid namespace, with it); its cgroup and folder go in the background."""
+        slot.channel.close()
+        with contextlib.suppress(ProcessLookupError, PermissionError):
+            os.killpg(slot.process.pid, signal.SIGKILL)
+
+        def clean_up() -> None:
+            with contextlib.suppress(subprocess.TimeoutExpired):
+                slot.process.wait(timeout=30)
+            if slot.cgroup is not None:
+                slot.cgroup.remove()
+            shutil.rmtree(slot.folder, ignore_errors=True)
+
+        self.background(clean_up)
+
+    def background(self, job) -> None:
+        try:
+            self._executor.submit(job)
+        except RuntimeError:  # shutting down: do it now
+            job()
+
+    # -- the bubblewrap command --
+    def bwrap_argv(self, work: Path, needs: RuntimeSandboxNeeds, env: dict[str, str],
+                   extra_binds: tuple[str, ...] = ()) -> list[str]:
         argv = [
             self.bwrap,
             "--unshare-all",  # network, pid, ipc, uts, cgroup, user namespaces
-            "--die-with-parent",
+            "--die-with-parent",  # and with bubblewrap's own process, everything in the sandbox
             "--new-session",
             "--clearenv",
             "--proc", "/proc",
             "--dev", "/dev",
+            "--tmpfs", "/dev/shm",
+            "--mqueue", "/dev/mqueue",  # so the supervisor sees POSIX message queues left behind
+            "--remount-ro", "/dev",  # a warm sandbox outlives candidates: nothing may stay in /dev
             "--tmpfs", "/tmp",
             "--bind", str(work), WORK_DIR,
             "--chdir", WORK_DIR,
@@ -114,9 +304,24 @@ class BubblewrapSandbox(LocalSandbox):
                 argv += ["--symlink", os.readlink(link), link]
             elif os.path.isdir(link):
                 argv += ["--ro-bind", link, link]
-        for path in BASE_RO_BINDS + tuple(needs.ro_binds):
+        for path in BASE_RO_BINDS + tuple(needs.ro_binds) + tuple(extra_binds):
             argv += ["--ro-bind-try", path, path]
         argv += ["--remount-ro", "/"]  # the sandbox's own root too: only /work and /tmp take writes
         for key, value in candidate_env(needs, env, home=WORK_DIR, tmp="/tmp").items():
             argv += ["--setenv", key, value]
         return argv
+
+
+def supervisor_python() -> tuple[str, tuple[str, ...]]:
+    """The interpreter the supervisor runs on inside the sandbox (standard library only, any
+    Python 3.8 or later), and any folder that must be bound for it: the system's python3 under
+    /usr when there is one (the sandbox sees /usr anyway), else the harness's own Python."""
+    system = shutil.which("python3", path=BASE_PATH)
+    if system and system.startswith("/usr/"):
+        return system, ()
+    python = os.path.realpath(sys.executable)
+    prefix = os.path.realpath(sys.base_prefix)
+    binds = () if prefix.startswith("/usr/") else (prefix,)
+    if binds and not python.startswith(prefix + "/"):
+        binds += (os.path.dirname(python),)
+    return python, binds

@@ -35,14 +35,64 @@ class Cgroup:
     def _memory_dir(self) -> Path:
         return self.dirs[0]
 
+    def _pids_dir(self) -> Path | None:
+        return self.dirs[-1] if self.version == 2 or len(self.dirs) > 1 else None
+
+    @property
+    def limits_processes(self) -> bool:
+        """Whether the group caps the process count (else RLIMIT_NPROC must)."""
+        return self._pids_dir() is not None
+
+    def oom_kills(self) -> int:
+        """How many processes the group's memory limit has killed so far."""
+        name = "memory.events" if self.version == 2 else "memory.oom_control"
+        return _read_keyed(self._memory_dir() / name).get("oom_kill", 0)
+
     def oom_killed(self) -> bool:
-        if self.version == 2:
-            return _read_keyed(self._memory_dir() / "memory.events").get("oom_kill", 0) > 0
-        return _read_keyed(self._memory_dir() / "memory.oom_control").get("oom_kill", 0) > 0
+        return self.oom_kills() > 0
 
     def peak_bytes(self) -> int:
         name = "memory.peak" if self.version == 2 else "memory.max_usage_in_bytes"
         return _read_int(self._memory_dir() / name)
+
+    def usage_bytes(self) -> int:
+        name = "memory.current" if self.version == 2 else "memory.usage_in_bytes"
+        return _read_int(self._memory_dir() / name)
+
+    def reset_peak(self) -> bool:
+        """Start a new peak reading; False where the kernel cannot (v2 resets only per open file)."""
+        if self.version == 2:
+            return False
+        try:
+            (self._memory_dir() / "memory.max_usage_in_bytes").write_text("0")
+        except OSError:
+            return False
+        return True
+
+    def set_limits(self, memory_bytes: int, max_processes: int, old_memory: int | None = None) -> None:
+        """Hard memory limit (swap off) and process count. ``old_memory``: the limit in force,
+        when it may be raised (cgroup v1 keeps memory <= memory+swap at every moment, so the
+        order of the two writes depends on the direction)."""
+        memory = self._memory_dir()
+        if self.version == 2:
+            (memory / "memory.max").write_text(str(memory_bytes))
+            _try_write(memory / "memory.swap.max", "0")
+        else:
+            pair = [("memory.limit_in_bytes", memory_bytes), ("memory.memsw.limit_in_bytes", memory_bytes)]
+            if old_memory is not None and memory_bytes > old_memory:
+                pair.reverse()
+            for name, value in pair:
+                if name == "memory.limit_in_bytes":
+                    (memory / name).write_text(str(value))
+                else:
+                    _try_write(memory / name, str(value))
+            _try_write(memory / "memory.swappiness", "0")
+        pids = self._pids_dir()
+        if pids is not None:
+            if self.version == 2:
+                _try_write(pids / "pids.max", str(max_processes))
+            else:
+                (pids / "pids.max").write_text(str(max_processes))
 
     def kill_all(self) -> None:
         """SIGKILL every process still in the group (belt and braces beside the pid namespace)."""
@@ -89,18 +139,9 @@ class CgroupFactory:
         dirs = tuple(parent / name for parent in self.parents)
         for directory in dirs:
             directory.mkdir()
-        if self.version == 2:
-            (dirs[0] / "memory.max").write_text(str(memory_bytes))
-            _try_write(dirs[0] / "memory.swap.max", "0")
-            _try_write(dirs[0] / "pids.max", str(max_processes))
-        else:
-            memory = dirs[0]
-            (memory / "memory.limit_in_bytes").write_text(str(memory_bytes))
-            _try_write(memory / "memory.memsw.limit_in_bytes", str(memory_bytes))
-            _try_write(memory / "memory.swappiness", "0")
-            if len(dirs) > 1:
-                (dirs[1] / "pids.max").write_text(str(max_processes))
-        return Cgroup(self.version, dirs)
+        group = Cgroup(self.version, dirs)
+        group.set_limits(memory_bytes, max_processes)
+        return group
 
 
 def detect(root: Path = CGROUP_ROOT) -> CgroupFactory | None:

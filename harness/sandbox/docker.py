@@ -29,9 +29,7 @@ import atexit
 import base64
 import concurrent.futures as futures
 import contextlib
-import json
 import os
-import signal
 import socket
 import struct
 import threading
@@ -41,8 +39,25 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
+from .cgroups import Cgroup
+from .supervised import (
+    AGENT_SOURCE,
+    CALL_SECONDS,
+    HELLO_SECONDS,
+    STEP_GRACE_SECONDS,
+    Channel,
+    ChannelLost,
+    Member,
+    SupervisorError,
+    SupervisorTrouble,
+    WarmPool,
+    brief,
+    max_runs_from_env,
+    memory_killed,
+    read_run_reply,
+    run_request,
+)
 
-AGENT_SOURCE = Path(__file__).with_name("docker_agent.py").read_text(encoding="utf-8")
 WORK_DIR = "/work"
 RUNNER = "10001:10001"
 LABEL_OWNER = "assay.owner"
@@ -61,31 +76,19 @@ TMPFS = {
 }
 CPUS = 1
 BACKOFF_SECONDS = (0.5, 1.0, 2.0)  # waits before the 2nd, 3rd and 4th try
-STEP_GRACE_SECONDS = 15.0  # beyond the step's own wall limit before the supervisor counts as lost
-CALL_SECONDS = 60.0
 API_SECONDS = 120
-HELLO_SECONDS = 60.0
 ENV_BASE = {"HOME": WORK_DIR, "TMPDIR": "/tmp", "LANG": "C.UTF-8", "PATH": "/usr/local/bin:/usr/bin:/bin"}
 
 
-class DaemonTrouble(Exception):
-    """The Docker daemon, a container or the channel to its supervisor failed: not the
-    candidate's doing."""
-
-
-class ChannelLost(DaemonTrouble):
-    """The supervisor's stream ended or went silent."""
-
-
-class SupervisorError(DaemonTrouble):
-    """The supervisor answered a request with an error."""
+class DaemonTrouble(SupervisorTrouble):
+    """The Docker daemon or a container failed: not the candidate's doing."""
 
 
 def _transient_errors() -> tuple[type[BaseException], ...]:
     import docker
     import requests
 
-    return (DaemonTrouble, OSError, requests.exceptions.RequestException, docker.errors.APIError)
+    return (SupervisorTrouble, OSError, requests.exceptions.RequestException, docker.errors.APIError)
 
 
 def _is_transient(exc: BaseException, container_gone: bool = False) -> bool:
@@ -100,52 +103,25 @@ def _is_transient(exc: BaseException, container_gone: bool = False) -> bool:
     return isinstance(exc, _transient_errors())
 
 
-def _brief(exc: BaseException) -> str:
-    text = str(exc).strip().splitlines()
-    return (text[0] if text else type(exc).__name__)[:300]
-
-
 # --- the channel to a container's supervisor --------------------------------------------------
 
-class Channel:
-    """JSON lines to the supervisor's stdin; its replies come back in Docker's multiplexed
-    stream frames (8-byte header: stream id, three zero bytes, big-endian payload size).
-    Requests may be pipelined: ``send`` now, ``receive`` the reply later (replies come in
-    order)."""
+class DockerChannel(Channel):
+    """The container's attached stdin; replies come back in Docker's multiplexed stream frames
+    (8-byte header: stream id, three zero bytes, big-endian payload size)."""
 
     def __init__(self, stream):
+        super().__init__()
         self.stream = stream  # keeps the HTTP response object alive
         self.sock: socket.socket = getattr(stream, "_sock", stream)
         self.stdout = bytearray()
         self.stderr = bytearray()
-        self.seq = 0
 
-    def call(self, request: dict, timeout: float) -> dict:
-        return self.receive(self.send(request), timeout)
-
-    def send(self, request: dict) -> int:
-        self.seq += 1
+    def _send_bytes(self, data: bytes) -> None:
         try:
             self.sock.settimeout(CALL_SECONDS)
-            self.sock.sendall(json.dumps(dict(request, seq=self.seq)).encode("ascii") + b"\n")
+            self.sock.sendall(data)
         except OSError as exc:
             raise ChannelLost(f"cannot reach the container's supervisor: {exc}") from None
-        return self.seq
-
-    def receive(self, seq: int, timeout: float) -> dict:
-        """The reply to request ``seq`` (replies to earlier, abandoned requests are skipped)."""
-        deadline = time.monotonic() + timeout
-        while True:
-            line = self._line(deadline)
-            try:
-                reply = json.loads(line)
-            except ValueError:
-                raise ChannelLost(f"garbled reply from the supervisor: {line[:200]!r}") from None
-            if reply.get("seq") == seq:
-                break
-        if not reply.get("ok"):
-            raise SupervisorError(f"supervisor: {reply.get('error')}")
-        return reply
 
     def _line(self, deadline: float) -> bytes:
         while b"\n" not in self.stdout:
@@ -185,114 +161,16 @@ class Channel:
                 thing.close()
 
 
-# --- containers and pools --------------------------------------------------------------------
+# --- containers -------------------------------------------------------------------------------
 
-@dataclass
-class Box:
+@dataclass(kw_only=True)
+class Box(Member):
     """One running container and what is known about it."""
 
     id: str
-    channel: Channel
     memory: int
     pids: int
-    cgroup: "HostCgroup | None" = None
-    served: int = 0
-    spoiled: str | None = None
-    reset_seq: int | None = None  # the reset sent when the last candidate left, reply unread
-
-    def settle(self) -> None:
-        """Read the pending reset's reply: the container is reusable only if the last
-        candidate left nothing behind."""
-        seq, self.reset_seq = self.reset_seq, None
-        if seq is None or self.spoiled:
-            return
-        try:
-            reply = self.channel.receive(seq, CALL_SECONDS)
-        except Exception as exc:
-            self.spoiled = f"reset failed: {_brief(exc)}"
-            return
-        if reply["left_running"]:
-            self.spoiled = f"{reply['left_running']} process(es) outlived the candidate"
-        elif reply["residue"]:
-            self.spoiled = f"could not empty the work dir: {reply['residue'][0]}"
-        elif reply["ipc"]:
-            self.spoiled = f"IPC objects left behind: {', '.join(reply['ipc'][:3])}"
-
-
-class Pool:
-    """Warm containers of one image. A container is checked out by one candidate at a time;
-    discarded ones are replaced in the background so the next checkout finds one ready."""
-
-    def __init__(self, sandbox: "DockerSandbox", runtime: str, image: str):
-        self.sandbox = sandbox
-        self.runtime = runtime
-        self.image = image
-        self.idle: list[Box] = []
-        self.spares = 0  # replacements being started in the background
-        self.cond = threading.Condition()
-
-    def acquire(self) -> Box:
-        while True:
-            with self.cond:
-                while not self.idle and self.spares > 0 and not self.sandbox.closed:
-                    self.cond.wait(timeout=HELLO_SECONDS)
-                box = self.idle.pop() if self.idle else None
-            if box is None:
-                return self.sandbox.start_box(self.image, self.runtime)
-            box.settle()
-            if box.spoiled is None:
-                return box
-            self._replace(box)
-
-    def release(self, box: Box) -> None:
-        if box.spoiled is None and box.served >= self.sandbox.max_runs:
-            box.spoiled = f"served {box.served} candidates"
-        if box.spoiled is None and not self.sandbox.closed:
-            try:  # emptied while nobody waits; the next checkout reads the outcome
-                box.reset_seq = box.channel.send({"op": "reset"})
-            except DaemonTrouble as exc:
-                box.spoiled = f"reset failed: {_brief(exc)}"
-        if box.spoiled is None and not self.sandbox.closed:
-            with self.cond:
-                self.idle.append(box)
-                self.cond.notify()
-            return
-        self._replace(box)
-
-    def _replace(self, box: Box) -> None:
-        self.sandbox.discard(box)
-        if not self.sandbox.closed:
-            with self.cond:
-                self.spares += 1
-            self.sandbox.background(self._start_spare)
-
-    def warm(self, count: int) -> None:
-        boxes = list(self.sandbox.pool_threads(lambda _: self.sandbox.start_box(self.image, self.runtime),
-                                               range(count)))
-        with self.cond:
-            self.idle += boxes
-            self.cond.notify_all()
-
-    def _start_spare(self) -> None:
-        box = None
-        try:
-            box = self.sandbox.start_box(self.image, self.runtime)
-        except Exception:  # the next checkout starts its own and reports the failure
-            pass
-        with self.cond:
-            self.spares -= 1
-            if box is not None:
-                if self.sandbox.closed:
-                    self.sandbox.discard(box)
-                else:
-                    self.idle.append(box)
-            self.cond.notify_all()
-
-    def drain(self) -> list[Box]:
-        with self.cond:
-            boxes, self.idle = self.idle, []
-            self.cond.notify_all()
-        return boxes
+    cgroup: Cgroup | None = None
 
 
 # --- one candidate's workspace ---------------------------------------------------------------
@@ -302,7 +180,7 @@ class DockerWorkspace:
     that when the daemon fails it can carry on in a fresh container. Writes are pipelined:
     their acknowledgements are read before the next request's reply."""
 
-    def __init__(self, sandbox: "DockerSandbox", pool: Pool, needs: RuntimeSandboxNeeds):
+    def __init__(self, sandbox: "DockerSandbox", pool: WarmPool, needs: RuntimeSandboxNeeds):
         self.sandbox = sandbox
         self.pool = pool
         self.needs = needs
@@ -328,11 +206,11 @@ class DockerWorkspace:
         merged = dict(ENV_BASE)
         merged.update(dict(self.needs.env))
         merged.update(env)
-        request = {"op": "run", "argv": list(argv), "env": merged, "limits": limits.as_dict()}
+        request = run_request(argv, merged, limits)
         started = time.monotonic()
         try:
             reply = self._perform(request, limits.wall_seconds + STEP_GRACE_SECONDS, limits)
-        except DaemonTrouble as exc:
+        except SupervisorTrouble as exc:
             return StepResult(exit_code=None, wall_seconds=round(time.monotonic() - started, 4),
                               infra_error=f"docker sandbox: {exc}"[:500])
         self.journal.append((request, limits))
@@ -344,39 +222,9 @@ class DockerWorkspace:
     def _step_result(self, reply: dict, limits: Limits, started: float) -> StepResult:
         if reply.get("container_oom"):
             self.box.spoiled = "the container was killed for memory"
-            return StepResult(exit_code=None, signal=signal.SIGKILL, memory_exceeded=True,
-                              wall_seconds=round(time.monotonic() - started, 4))
-        if reply.get("spawn_error"):
-            return StepResult(exit_code=None, infra_error=reply["spawn_error"])
-        code = reply["returncode"]
-        result = StepResult(
-            exit_code=code if code >= 0 else None,
-            signal=-code if code < 0 else None,
-            wall_seconds=reply["wall"],
-            stdout=base64.b64decode(reply["stdout"]).decode("utf-8", errors="replace"),
-            stderr=base64.b64decode(reply["stderr"]).decode("utf-8", errors="replace"),
-            timed_out=reply["timed_out"],
-            output_exceeded=reply["flooded"],
-        )
-        # The same readings as harness/sandbox/process.py makes of a local child.
-        if code == -signal.SIGXCPU or (code == -signal.SIGKILL and reply["wall"] >= limits.cpu_seconds):
-            result.timed_out = True
-        if code == -signal.SIGXFSZ:
-            result.file_size_exceeded = True
-        oom_kills = reply["oom_kills"]
-        if oom_kills is None:  # no readable OOM counter: a SIGKILL nobody else sent
-            result.memory_exceeded = code == -signal.SIGKILL and not (result.timed_out or result.output_exceeded)
-        elif oom_kills > 0 and not result.timed_out:
-            result.memory_exceeded = True
-        if result.timed_out:
-            self.box.spoiled = self.box.spoiled or "a step timed out"
-        if result.memory_exceeded:
-            self.box.spoiled = self.box.spoiled or "a step was killed for memory"
-        if reply["left_running"]:
-            self.box.spoiled = self.box.spoiled or f"{reply['left_running']} process(es) outlived a step"
-            result.extra["processes_left_running"] = reply["left_running"]
-        if reply["residue"]:
-            self.box.spoiled = self.box.spoiled or f"could not empty the scratch folders: {reply['residue'][0]}"
+            return memory_killed(started)
+        result, spoiled = read_run_reply(reply, limits)
+        self.box.spoiled = self.box.spoiled or spoiled
         return result
 
     def _perform(self, request: dict, timeout: float, limits: Limits | None, deferred: bool = False) -> dict:
@@ -404,8 +252,8 @@ class DockerWorkspace:
                 last = exc
                 if limits is not None and self.sandbox.died_of_memory(self.box):
                     return {"container_oom": True}
-                self.box.spoiled = f"daemon trouble: {_brief(exc)}"
-        raise DaemonTrouble(f"gave up after {len(BACKOFF_SECONDS) + 1} tries: {_brief(last)}")
+                self.box.spoiled = f"daemon trouble: {brief(exc)}"
+        raise DaemonTrouble(f"gave up after {len(BACKOFF_SECONDS) + 1} tries: {brief(last)}")
 
     def _confirm(self) -> None:
         while self.unconfirmed:
@@ -427,12 +275,11 @@ class DockerWorkspace:
 
     def release(self) -> None:
         """Hand the container back: the pool empties it for the next candidate, or discards it."""
-        self.box.served += 1
         if self.box.spoiled is None:
             try:
                 self._confirm()
             except Exception as exc:
-                self.box.spoiled = f"daemon trouble: {_brief(exc)}"
+                self.box.spoiled = f"daemon trouble: {brief(exc)}"
         self.pool.release(self.box)
 
 
@@ -445,12 +292,12 @@ class DockerSandbox:
                  runtimes_dirs: list[Path] | None = None):
         # work_root is accepted for make_sandbox's sake: candidates' files live in containers.
         self.run_id = uuid.uuid4().hex
-        self.max_runs = max_runs if max_runs is not None else _max_runs_from_env()
+        self.max_runs = max_runs if max_runs is not None else max_runs_from_env(MAX_RUNS_ENV, DEFAULT_MAX_RUNS)
         self.runtimes_dirs = runtimes_dirs
         self.client = None
         self.daemon: dict = {}
         self.images: dict[str, dict] = {}
-        self.pools: dict[str, Pool | SandboxUnavailable] = {}
+        self.pools: dict[str, WarmPool | SandboxUnavailable] = {}
         self.orphans_removed = 0
         self.closed = False
         self._lock = threading.Lock()
@@ -470,7 +317,7 @@ class DockerSandbox:
                 orphans = remove_containers(client, orphans_only=True)
                 self.images = self._survey_images(client)
             except Exception as exc:  # the daemon answered the ping, then failed
-                raise SandboxUnavailable(f"the Docker daemon failed while the sandbox started: {_brief(exc)}") from None
+                raise SandboxUnavailable(f"the Docker daemon failed while the sandbox started: {brief(exc)}") from None
             self.daemon = {
                 "version": info.get("ServerVersion"),
                 "api_version": client.api.api_version,
@@ -514,7 +361,7 @@ class DockerSandbox:
             if self.closed:
                 return
             self.closed = True
-        pools = [p for p in self.pools.values() if isinstance(p, Pool)]
+        pools = [p for p in self.pools.values() if isinstance(p, WarmPool)]
         for pool in pools:
             for box in pool.drain():
                 box.channel.close()
@@ -529,7 +376,7 @@ class DockerSandbox:
             atexit.unregister(self.close)
 
     # -- images and pools --
-    def pool_for(self, needs: RuntimeSandboxNeeds) -> Pool:
+    def pool_for(self, needs: RuntimeSandboxNeeds) -> WarmPool:
         with self._lock:
             pool = self.pools.get(needs.name)
             if pool is None:
@@ -547,7 +394,7 @@ class DockerSandbox:
         self.check()
         self.pool_for(needs).warm(count)
 
-    def _make_pool(self, needs: RuntimeSandboxNeeds) -> Pool:
+    def _make_pool(self, needs: RuntimeSandboxNeeds) -> WarmPool:
         from .images import find_image, image_tag
 
         if needs.image:
@@ -567,7 +414,7 @@ class DockerSandbox:
                 f"build it with: assay runtimes build {needs.name} (add --offline-base without a registry)"
             )
         self.images[needs.name] = {"tag": tag, "id": image_id}
-        return Pool(self, needs.name, image_id)
+        return WarmPool(self, lambda: self.start_box(image_id, needs.name))
 
     def _survey_images(self, client) -> dict[str, dict]:
         """Every known runtime's expected image and, when built, its id (for the manifest)."""
@@ -619,7 +466,7 @@ class DockerSandbox:
         container = created["Id"]
         try:
             stream = api.attach_socket(container, params={"stdin": 1, "stdout": 1, "stderr": 1, "stream": 1})
-            channel = Channel(stream)
+            channel = DockerChannel(stream)
             api.start(container)
             hello = channel.call({"op": "hello"}, HELLO_SECONDS)
             if hello["pid"] != 1 or hello["uid"] != 10001:
@@ -628,7 +475,7 @@ class DockerSandbox:
             with contextlib.suppress(Exception):
                 api.remove_container(container, force=True)
             raise
-        box = Box(container, channel, memory, pids, HostCgroup.find(api, container))
+        box = Box(id=container, channel=channel, memory=memory, pids=pids, cgroup=find_container_cgroup(api, container))
         if self.closed:
             self.discard(box)
             raise DaemonTrouble("the sandbox was closed")
@@ -643,7 +490,7 @@ class DockerSandbox:
         if (memory, pids) == (box.memory, box.pids):
             return
         if box.cgroup is not None:
-            box.cgroup.set_limits(box.memory, memory, pids)
+            box.cgroup.set_limits(memory, pids, old_memory=box.memory)
             box.memory, box.pids = memory, pids
             return
         api = self.client.api
@@ -679,10 +526,6 @@ class DockerSandbox:
         self._pending.add(future)
         future.add_done_callback(self._pending.discard)
 
-    def pool_threads(self, job, items):
-        with futures.ThreadPoolExecutor(max_workers=4) as pool:
-            return list(pool.map(job, items))
-
     def retry(self, job, what: str, not_found_ok: bool = False):
         """Run ``job``, retrying daemon trouble with backoff; DaemonTrouble when it persists."""
         import docker
@@ -698,61 +541,36 @@ class DockerSandbox:
                 if not _is_transient(exc):
                     raise
                 if attempt == len(BACKOFF_SECONDS):
-                    raise DaemonTrouble(f"could not {what}: {_brief(exc)}") from None
+                    raise DaemonTrouble(f"could not {what}: {brief(exc)}") from None
                 time.sleep(BACKOFF_SECONDS[attempt])
 
 
-class HostCgroup:
+def find_container_cgroup(api, container: str, root: Path = Path("/sys/fs/cgroup")) -> Cgroup | None:
     """A container's cgroup directories as this host sees them (v1: memory and pids
     hierarchies; v2: one directory). Found through the container's pid 1, and only trusted
     when the path names the container, so a daemon on another host or in another pid
     namespace falls back to the API."""
-
-    def __init__(self, version: int, memory: Path, pids: Path):
-        self.version = version
-        self.memory = memory
-        self.pids = pids
-
-    @classmethod
-    def find(cls, api, container: str, root: Path = Path("/sys/fs/cgroup")) -> "HostCgroup | None":
-        try:
-            pid = api.inspect_container(container)["State"]["Pid"]
-            lines = Path(f"/proc/{pid}/cgroup").read_text().splitlines()
-        except Exception:
-            return None
-        paths = {}
-        for line in lines:
-            _, controllers, path = line.split(":", 2)
-            for controller in controllers.split(",") if controllers else [""]:
-                paths[controller] = path.lstrip("/")
-        if "memory" in paths and "pids" in paths:
-            group = cls(1, root / "memory" / paths["memory"], root / "pids" / paths["pids"])
-            needed = [group.memory / "memory.limit_in_bytes", group.pids / "pids.max"]
-        elif "" in paths:
-            directory = root / paths[""]
-            group = cls(2, directory, directory)
-            needed = [directory / "memory.max", directory / "pids.max"]
-        else:
-            return None
-        if container not in str(group.memory) or not all(os.access(f, os.W_OK) for f in needed):
-            return None
-        return group
-
-    def set_limits(self, old_memory: int, memory: int, pids: int) -> None:
-        if self.version == 2:
-            (self.memory / "memory.max").write_text(str(memory))
-            _write_if_present(self.memory / "memory.swap.max", "0")
-        else:
-            # v1 wants memory <= memory+swap at every moment: order the two writes.
-            pair = [("memory.limit_in_bytes", memory), ("memory.memsw.limit_in_bytes", memory)]
-            for name, value in (reversed(pair) if memory > old_memory else pair):
-                _write_if_present(self.memory / name, str(value), required=name == "memory.limit_in_bytes")
-        (self.pids / "pids.max").write_text(str(pids))
-
-
-def _write_if_present(path: Path, value: str, required: bool = False) -> None:
-    if required or path.exists():
-        path.write_text(value)
+    try:
+        pid = api.inspect_container(container)["State"]["Pid"]
+        lines = Path(f"/proc/{pid}/cgroup").read_text().splitlines()
+    except Exception:
+        return None
+    paths = {}
+    for line in lines:
+        _, controllers, path = line.split(":", 2)
+        for controller in controllers.split(",") if controllers else [""]:
+            paths[controller] = path.lstrip("/")
+    if "memory" in paths and "pids" in paths:
+        group = Cgroup(1, (root / "memory" / paths["memory"], root / "pids" / paths["pids"]))
+        needed = [group.dirs[0] / "memory.limit_in_bytes", group.dirs[1] / "pids.max"]
+    elif "" in paths:
+        group = Cgroup(2, (root / paths[""],))
+        needed = [group.dirs[0] / "memory.max", group.dirs[0] / "pids.max"]
+    else:
+        return None
+    if container not in str(group.dirs[0]) or not all(os.access(f, os.W_OK) for f in needed):
+        return None
+    return group
 
 
 # --- the daemon and the labels ---------------------------------------------------------------
@@ -766,7 +584,7 @@ def connect(timeout: int = API_SECONDS):
         client = docker.from_env(timeout=timeout)
         client.ping()
     except Exception as exc:  # the SDK wraps connection failures in several exception types
-        reason = _brief(exc)
+        reason = brief(exc)
         if "Connection refused" in str(exc) or "No such file" in str(exc) or "FileNotFoundError" in str(exc):
             reason = "nothing is listening there"
         raise SandboxUnavailable(
@@ -775,19 +593,6 @@ def connect(timeout: int = API_SECONDS):
             "at a running one, or choose another backend with --sandbox bubblewrap."
         ) from None
     return client
-
-
-def _max_runs_from_env() -> int:
-    raw = os.environ.get(MAX_RUNS_ENV, "")
-    if not raw:
-        return DEFAULT_MAX_RUNS
-    try:
-        value = int(raw)
-    except ValueError:
-        value = 0
-    if value < 1:
-        raise SandboxUnavailable(f"{MAX_RUNS_ENV}={raw!r}: expected a whole number of candidates, 1 or more")
-    return value
 
 
 def host_id() -> str:

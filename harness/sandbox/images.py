@@ -37,7 +37,7 @@ LABEL_RUNTIME = "assay.runtime"
 LABEL_DIGEST = "assay.runtime-digest"
 
 # Added on top of every runtime's own image. Only installs python3 when the toolchain image
-# lacks the modules the supervisor imports (harness/sandbox/docker_agent.py).
+# lacks the modules the supervisor imports (harness/sandbox/step_supervisor.py).
 SUPERVISOR_LAYER = f"""\
 ARG TOOLCHAIN
 FROM ${{TOOLCHAIN}}

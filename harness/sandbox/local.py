@@ -24,15 +24,21 @@ def default_work_root() -> str:
     return tempfile.gettempdir()
 
 
-class LocalWorkspace:
-    """A host temp folder for one candidate; subclasses decide how a step is wrapped."""
+def private_folder(root: Path, owner: int | None, prefix: str = "cand-") -> Path:
+    """A new folder under ``root`` that only ``owner`` (or this user) can enter."""
+    path = Path(tempfile.mkdtemp(prefix=prefix, dir=root))
+    if owner is not None:
+        os.chown(path, owner, owner)
+    os.chmod(path, 0o700)
+    return path
 
-    def __init__(self, root: Path, owner: int | None):
-        self.path = Path(tempfile.mkdtemp(prefix="cand-", dir=root))
+
+class LocalWorkspace:
+    """A host folder for one candidate; subclasses decide how a step is wrapped."""
+
+    def __init__(self, path: Path, owner: int | None):
+        self.path = path
         self.owner = owner
-        if owner is not None:
-            os.chown(self.path, owner, owner)
-        os.chmod(self.path, 0o700)
 
     def write(self, name: str, content: str) -> None:
         target = self.path / name

@@ -193,18 +193,13 @@ def _make_preexec(limits: Limits, group: Cgroup | None, user: int | None, use_as
     rlimits, then drop to ``user``. Kept to plain system calls, since it runs in a forked copy
     of a multi-threaded process."""
     procs_files = group.procs_files if group else ()
-    limit_processes = group is None or len(group.dirs) < 2 and group.version == 1
+    limit_processes = group is None or not group.limits_processes
     cpu = max(1, int(limits.cpu_seconds + 0.999))
     fsize = limits.max_file_mb * 1024 * 1024
     memory = limits.memory_mb * 1024 * 1024
 
     def preexec() -> None:
-        for path in procs_files:
-            fd = os.open(path, os.O_WRONLY)
-            try:
-                os.write(fd, b"0")
-            finally:
-                os.close(fd)
+        _join_groups(procs_files)
         resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
         resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
         resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
@@ -212,9 +207,34 @@ def _make_preexec(limits: Limits, group: Cgroup | None, user: int | None, use_as
             resource.setrlimit(resource.RLIMIT_AS, (memory, memory))
         if limit_processes:
             resource.setrlimit(resource.RLIMIT_NPROC, (limits.max_processes, limits.max_processes))
-        if user is not None:
-            os.setgroups([])
-            os.setgid(user)
-            os.setuid(user)
+        _become(user)
 
     return preexec
+
+
+def join_and_drop(group: Cgroup | None, user: int | None):
+    """A preexec that only joins ``group`` and drops to ``user``: for a long-lived sandbox whose
+    supervisor sets each step's own limits."""
+    procs_files = group.procs_files if group else ()
+
+    def preexec() -> None:
+        _join_groups(procs_files)
+        _become(user)
+
+    return preexec
+
+
+def _join_groups(procs_files: tuple[str, ...]) -> None:
+    for path in procs_files:
+        fd = os.open(path, os.O_WRONLY)
+        try:
+            os.write(fd, b"0")
+        finally:
+            os.close(fd)
+
+
+def _become(user: int | None) -> None:
+    if user is not None:
+        os.setgroups([])
+        os.setgid(user)
+        os.setuid(user)

@@ -1,17 +1,18 @@
-"""The Docker sandbox's in-container supervisor: runs as the container's pid 1.
+"""The step supervisor: pid 1 of a long-lived sandbox (a Docker container, or a warm
+bubblewrap sandbox), running each step of each candidate inside it.
 
-Why it exists: starting a process with ``docker exec`` costs tens of milliseconds (runc joins
-the namespaces afresh each time), more than a whole Python candidate takes. Instead the backend
-starts this script once per container (``python3 -I -S -c <this file>``) and talks to it over
-the container's attached stdin/stdout, one JSON line per request and per reply; it spawns each
-step with plain fork/exec.
+Why it exists: entering a sandbox afresh per step costs milliseconds to tens of milliseconds
+(``docker exec`` joins the namespaces anew; bubblewrap builds namespaces and mounts), as much
+as a whole Python candidate takes. Instead the backend starts this script once per sandbox
+(``python3 -I -S -c <this file>``) and talks to it over its stdin/stdout, one JSON line per
+request and per reply; it spawns each step with plain fork/exec.
 
-Why it is safe to share a uid with the candidate: as pid 1 of the container's pid namespace it
+Why it is safe to share a uid with the candidate: as pid 1 of the sandbox's pid namespace it
 cannot be signalled from inside the namespace (the kernel drops SIGKILL/SIGSTOP sent to a
 namespace's init by its members, and every catchable signal is ignored here), and it makes
 itself non-dumpable, so a candidate can neither ptrace it nor open its /proc files (memory,
 fds, environment). After every step it kills whatever the step left running and reports it, so
-the backend can discard the container.
+the backend can discard the sandbox.
 
 Standard library only and no harness imports: the file is sent as source into the image's
 ``python3``.
@@ -39,7 +40,7 @@ IGNORED = [s for s in (signal.SIGINT, signal.SIGTERM, signal.SIGHUP, signal.SIGQ
 
 
 def oom_counter_files():
-    """The container's own OOM-kill counter, seen from inside (cgroup v2 or v1)."""
+    """The sandbox's own OOM-kill counter, seen from inside (cgroup v2 or v1), where visible."""
     found = []
     try:
         lines = open("/proc/self/cgroup").read().splitlines()
@@ -116,7 +117,7 @@ class Supervisor:
             proc = subprocess.Popen(
                 argv, cwd=WORK, env=env, stdin=subprocess.DEVNULL, stdout=subprocess.PIPE,
                 stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
-                preexec_fn=step_preexec(limits),
+                preexec_fn=step_preexec(limits, req.get("rlimit_memory"), req.get("rlimit_processes")),
             )
         except OSError as exc:
             return {"spawn_error": "cannot start %s: %s" % (argv[0], exc)}
@@ -153,9 +154,13 @@ class Supervisor:
                 "python": sys.version.split()[0], "memory_bytes": memory_usage()}
 
 
-def step_preexec(limits):
+def step_preexec(limits, rlimit_memory, rlimit_processes):
+    """Per-step rlimits. Memory and process counts are normally the sandbox's cgroup's job;
+    where there is none, the backend asks for RLIMIT_AS and RLIMIT_NPROC instead."""
     cpu = max(1, int(float(limits["cpu_seconds"]) + 0.999))
     fsize = int(limits["max_file_mb"]) * 1024 * 1024
+    memory = int(limits["memory_mb"]) * 1024 * 1024
+    processes = int(limits["max_processes"])
 
     def preexec():
         for sig in IGNORED:
@@ -163,6 +168,10 @@ def step_preexec(limits):
         resource.setrlimit(resource.RLIMIT_CPU, (cpu, cpu + 1))
         resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
         resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
+        if rlimit_memory:
+            resource.setrlimit(resource.RLIMIT_AS, (memory, memory))
+        if rlimit_processes:
+            resource.setrlimit(resource.RLIMIT_NPROC, (processes, processes))
         # Dumpable again (exec would do it anyway), else /proc/self belongs to root. Then the
         # memory cgroup's OOM killer must pick the step, never the supervisor.
         LIBC.prctl(PR_SET_DUMPABLE, 1, 0, 0, 0)
@@ -305,7 +314,7 @@ def empty_folder(top):
 
 def ipc_objects():
     """System V shared memory, semaphores and message queues, and POSIX message queues, in
-    this container's IPC namespace (the next candidate would share them)."""
+    this sandbox's IPC namespace (the next candidate would share them)."""
     found = []
     for kind in ("shm", "sem", "msg"):
         try:
@@ -352,7 +361,7 @@ def main():
         out.write(json.dumps(reply).encode("ascii") + b"\n")
         out.flush()
         reap()
-    # stdin closed: the harness is gone; exiting stops the container.
+    # stdin closed: the harness is gone; exiting ends the sandbox.
 
 
 if __name__ == "__main__":
