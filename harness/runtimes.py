@@ -191,8 +191,13 @@ def available_runtimes(extra: list[Path] | None = None) -> list[str]:
 
 
 def load_runtime(name: str, extra: list[Path] | None = None) -> Runtime:
-    path = find_runtime_dir(name, extra)
+    return load_runtime_folder(find_runtime_dir(name, extra))
+
+
+def load_runtime_folder(path: Path) -> Runtime:
     file = path / RUNTIME_FILE
+    if not file.is_file():
+        raise RuntimeConfigError(f"{file}: missing (not a runtime folder)")
     return parse_runtime(read_yaml(file, RuntimeConfigError), path, file)
 
 
@@ -258,6 +263,7 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
             ro_binds=tuple(ro_binds),
             env=tuple((str(k), str(v)) for k, v in env.items()),
             image=sandbox.get("image"),
+            folder=str(path),
         ),
         version_command=tuple(version) if _str_list(version, allow_empty=True) else (),
         limits=dict(limits),

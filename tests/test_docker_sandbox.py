@@ -7,6 +7,7 @@ these tests skip and say why. CI has both (.ci/docker-setup.sh)."""
 
 from __future__ import annotations
 
+import contextlib
 import json
 import os
 import shutil
@@ -153,6 +154,30 @@ def test_a_runtime_without_its_image_says_how_to_build_it(docker_box, tmp_path):
                 pass
     finally:
         box.close()
+
+
+def test_a_runtime_kept_outside_the_project_is_built_and_scored_with_runtimes_dir(python_image, client, tmp_path,
+                                                                                  tiny_set):
+    outside = tmp_path / "team-runtimes"
+    shutil.copytree(ROOT / "runtimes" / "python", outside / "snake")
+    yaml_file = outside / "snake" / "runtime.yaml"
+    yaml_file.write_text(yaml_file.read_text().replace("name: python", "name: snake", 1))
+    tag = images.image_tag(load_runtime("snake", [outside]))
+    built = subprocess.run(ASSAY + ["runtimes", "build", "snake", "--runtimes-dir", str(outside), "--offline-base"],
+                           capture_output=True, text=True, cwd=ROOT, timeout=900)
+    try:
+        assert built.returncode == 0, built.stderr
+        dump = write_dump(tmp_path / "snake.jsonl", [{"problem": "add_pair", "language": "snake",
+                                                      "completion": "    return a + b\n"}])
+        scored = subprocess.run(ASSAY + ["score", str(dump), "--set", str(tiny_set), "--out", str(tmp_path / "out"),
+                                         "--sandbox", "docker", "--runtimes-dir", str(outside), "--json"],
+                                capture_output=True, text=True, cwd=ROOT, timeout=300)
+        assert scored.returncode == 0, scored.stderr
+        verdicts = [json.loads(line) for line in (tmp_path / "out" / "executions.jsonl").read_text().splitlines()]
+        assert [v["outcome"] for v in verdicts] == ["passed"]
+    finally:
+        with contextlib.suppress(Exception):
+            client.images.remove(tag)
 
 
 # --- limits -----------------------------------------------------------------------------------

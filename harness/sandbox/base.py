@@ -87,9 +87,12 @@ class Sandbox(Protocol):
 
 @dataclass(frozen=True)
 class RuntimeSandboxNeeds:
-    """What a runtime asks of a sandbox: read-only paths to expose and its environment."""
+    """What a runtime asks of a sandbox: read-only paths to expose and its environment; for
+    Docker, an image named in runtime.yaml, else the runtime's folder (its image is built from
+    the folder's files, wherever it was found)."""
 
     name: str
     ro_binds: tuple[str, ...] = ()
     env: tuple[tuple[str, str], ...] = ()
     image: str | None = None
+    folder: str | None = None

@@ -151,6 +151,13 @@ class BubblewrapSandbox(LocalSandbox):
                 "bubblewrap cannot create a sandbox here (user namespaces disabled?): "
                 + (probe.infra_error or probe.stderr.strip()[:300] or f"exit {probe.exit_code}")
             )
+        try:
+            self.discard(self.start_slot(RuntimeSandboxNeeds("probe")))
+        except (SupervisorTrouble, OSError) as exc:
+            raise SandboxUnavailable(
+                "bubblewrap cannot start its step supervisor, which needs a python3 (3.8 or later) under "
+                f"/usr, or a Python the sandbox user can read: {brief(exc)}"
+            ) from None
 
     @contextlib.contextmanager
     def workspace(self, needs: RuntimeSandboxNeeds):

@@ -400,10 +400,13 @@ class DockerSandbox:
         if needs.image:
             tag = needs.image
         else:
-            from ..runtimes import RuntimeConfigError, load_runtime
+            from ..runtimes import RuntimeConfigError, load_runtime, load_runtime_folder
 
             try:
-                runtime = load_runtime(needs.name, self.runtimes_dirs)
+                if needs.folder:
+                    runtime = load_runtime_folder(Path(needs.folder))
+                else:
+                    runtime = load_runtime(needs.name, self.runtimes_dirs)
             except RuntimeConfigError as exc:
                 raise SandboxUnavailable(f"docker sandbox: {exc}") from None
             tag = image_tag(runtime)
