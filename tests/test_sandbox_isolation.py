@@ -7,7 +7,7 @@ import time
 
 import pytest
 
-from harness.sandbox import Limits, RuntimeSandboxNeeds, make_sandbox
+from harness.sandbox import Limits, RuntimeSandboxNeeds, SandboxUnavailable, make_sandbox
 
 NEEDS = RuntimeSandboxNeeds("python")
 LIMITS = Limits(wall_seconds=10, cpu_seconds=10)
@@ -153,14 +153,21 @@ def test_a_sandbox_is_retired_after_a_candidate_that_spoils_it(one_slot, code, l
     assert slot.process.wait(timeout=10) is not None  # the old sandbox is gone
 
 
-def test_a_sandbox_is_retired_after_its_run_allowance():
+def test_a_sandbox_is_retired_after_its_run_allowance_from_the_environment(monkeypatch):
+    monkeypatch.setenv("ASSAY_BWRAP_MAX_RUNS", "2")
     box = make_sandbox("bubblewrap")
-    box.max_runs = 2
     try:
         slots = [slot_of(box, "print(1)")[1] for _ in range(3)]
     finally:
         box.close()
     assert slots[0] is slots[1] and slots[2] is not slots[0]
+
+
+@pytest.mark.parametrize("value", ["0", "many"])
+def test_a_bad_run_allowance_is_refused_by_name(monkeypatch, value):
+    monkeypatch.setenv("ASSAY_BWRAP_MAX_RUNS", value)
+    with pytest.raises(SandboxUnavailable, match="ASSAY_BWRAP_MAX_RUNS"):
+        make_sandbox("bubblewrap")
 
 
 def test_closing_the_sandbox_ends_every_warm_sandbox_and_removes_its_folders():

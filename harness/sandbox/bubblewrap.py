@@ -117,12 +117,12 @@ class BubblewrapSandbox(LocalSandbox):
     name = "bubblewrap"
 
     def __init__(self, work_root: Path | None = None, *, max_runs: int | None = None):
+        self.max_runs = max_runs if max_runs is not None else max_runs_from_env(MAX_RUNS_ENV)
         super().__init__(work_root, "assay-work-")
         os.chmod(self.work_root, 0o711)  # the sandbox user passes through to its own folder
         self.bwrap = shutil.which("bwrap")
         self.run_as = NOBODY if os.geteuid() == 0 else None
         self.cgroups = cgroups.detect()
-        self.max_runs = max_runs if max_runs is not None else max_runs_from_env(MAX_RUNS_ENV)
         self.pools: dict[RuntimeSandboxNeeds, WarmPool] = {}
         self.closed = False
         self._lock = threading.Lock()
