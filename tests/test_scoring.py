@@ -224,14 +224,16 @@ def test_a_cache_folder_carries_verdicts_to_the_next_checkpoint(tmp_path, tiny_s
 
 
 def test_repeat_marks_candidates_whose_verdicts_disagree_as_flaky(tmp_path, tiny_set):
-    # Right or wrong by a coin flip: twelve runs all agreeing has probability 2 / 2**12.
-    flaky = "    import os\n    return a + b if os.urandom(1)[0] % 2 else 0\n"
+    # Right or wrong by one coin flip per run (kept for the run's later cases): 24 runs all
+    # agreeing has probability 2 / 2**24.
+    flaky = ("    import os\n    if not hasattr(add_pair, 'coin'):\n        add_pair.coin = os.urandom(1)[0] % 2\n"
+             "    return a + b if add_pair.coin else a + b + 1\n")
     rows = [{"problem": "add_pair", "language": "python", "completion": CANDIDATES["passed"]},
             {"problem": "add_pair", "language": "python", "completion": flaky}]
     out = tmp_path / "out"
-    assay("score", write_dump(tmp_path / "a.jsonl", rows), "--set", tiny_set, "--out", out, "-q", "--repeat", "12")
+    assay("score", write_dump(tmp_path / "a.jsonl", rows), "--set", tiny_set, "--out", out, "-q", "--repeat", "24")
     saved = {r["sample"]: r for r in read_rows(out)}
-    assert saved[0]["flaky"] is False and saved[0]["repeat_outcomes"] == ["passed"] * 12
+    assert saved[0]["flaky"] is False and saved[0]["repeat_outcomes"] == ["passed"] * 24
     assert saved[1]["flaky"] is True and set(saved[1]["repeat_outcomes"]) == {"passed", "wrong_answer"}
     assert json.loads((out / "summary.json").read_text())["flaky"] == {"python": 1}
 

@@ -92,6 +92,7 @@ class BubblewrapWorkspace(LocalWorkspace):
                               infra_error=f"{argv[0]}: command not found in the sandbox (PATH={merged['PATH']})")
         slot, group = self.slot, self.slot.cgroup
         started = time.monotonic()
+        oom_before = None
         try:
             oom_before, baseline = self.sandbox.fit_limits(slot, limits)
             reply = slot.channel.call(
@@ -100,7 +101,7 @@ class BubblewrapWorkspace(LocalWorkspace):
                 limits.wall_seconds + STEP_GRACE_SECONDS)
         except (SupervisorTrouble, OSError) as exc:
             slot.spoiled = f"supervisor lost: {brief(exc)}"
-            if group is not None and group.oom_kills() > oom_before:
+            if group is not None and oom_before is not None and group.oom_kills() > oom_before:
                 return memory_killed(started)  # the step took the supervisor down with it
             return StepResult(exit_code=None, wall_seconds=round(time.monotonic() - started, 4),
                               infra_error=f"bubblewrap sandbox: {exc}"[:500])
