@@ -142,7 +142,7 @@ def test_the_supervisor_cannot_be_killed_or_traced_by_the_candidate(one_slot):
     ("while True: pass", Limits(wall_seconds=1, cpu_seconds=1)),
     ("x = bytearray(600 * 1024 * 1024)", Limits(memory_mb=128)),
     ("import subprocess\nsubprocess.Popen(['sleep', '30'], start_new_session=True)", LIMITS),
-    ("import ctypes\nprint(ctypes.CDLL(None).shmget(0, 4096, 0o1600))", LIMITS),  # IPC_PRIVATE, IPC_CREAT
+    ("import ctypes\nprint(ctypes.CDLL(None).shmget(0, 4096, 0o1600))", LIMITS),  # key IPC_PRIVATE (0), flags IPC_CREAT (0o1000) | 0o600, per <bits/ipc.h> (values from memory)
     ("import ctypes, os\nrt = ctypes.CDLL('librt.so.1')\nprint(rt.mq_open(b'/left', os.O_CREAT | os.O_RDWR, 0o600, None))",
      LIMITS),
 ], ids=["timeout", "memory", "process-left-running", "sysv-shared-memory", "posix-message-queue"])

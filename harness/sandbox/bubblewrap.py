@@ -109,7 +109,7 @@ class BubblewrapWorkspace(LocalWorkspace):
             reply["oom_kills"] = group.oom_kills() - oom_before
         result, spoiled = read_run_reply(reply, limits)
         slot.spoiled = slot.spoiled or spoiled
-        if group is not None and group.version == 1:  # v2 cannot restart its peak reading
+        if baseline is not None:
             result.extra["peak_memory_mb"] = round(max(0, group.peak_bytes() - baseline) / 2**20, 1)
         return result
 
@@ -248,19 +248,20 @@ class BubblewrapSandbox(LocalSandbox):
             raise
         return slot
 
-    def fit_limits(self, slot: Slot, limits: Limits) -> tuple[int, int]:
+    def fit_limits(self, slot: Slot, limits: Limits) -> tuple[int, int | None]:
         """Give the sandbox's cgroup the step's limits and restart its peak reading; returns
-        the group's memory-kill count so far and the memory in use before the step (the
-        supervisor's own), both 0 without a cgroup."""
+        the group's memory-kill count so far (0 without a cgroup) and the memory in use before
+        the step, the supervisor's own (None where no per-step peak can be read: no cgroup,
+        or cgroup v2, which restarts a peak only per open file)."""
         group = slot.cgroup
         if group is None:
-            return 0, 0
+            return 0, None
         memory, processes = self._group_limits(limits)
         if (memory, processes) != (slot.memory, slot.processes):
             group.set_limits(memory, processes, old_memory=slot.memory)
             slot.memory, slot.processes = memory, processes
-        group.reset_peak()
-        return group.oom_kills(), group.usage_bytes()
+        baseline = group.usage_bytes() if group.reset_peak() else None
+        return group.oom_kills(), baseline
 
     @staticmethod
     def _group_limits(limits: Limits) -> tuple[int, int]:

@@ -78,14 +78,12 @@ class Cgroup:
             (memory / "memory.max").write_text(str(memory_bytes))
             _try_write(memory / "memory.swap.max", "0")
         else:
-            pair = [("memory.limit_in_bytes", memory_bytes), ("memory.memsw.limit_in_bytes", memory_bytes)]
-            if old_memory is not None and memory_bytes > old_memory:
-                pair.reverse()
-            for name, value in pair:
-                if name == "memory.limit_in_bytes":
-                    (memory / name).write_text(str(value))
-                else:
-                    _try_write(memory / name, str(value))
+            raising = old_memory is not None and memory_bytes > old_memory
+            if raising:  # the memory+swap ceiling first
+                _try_write(memory / "memory.memsw.limit_in_bytes", str(memory_bytes))
+            (memory / "memory.limit_in_bytes").write_text(str(memory_bytes))
+            if not raising:
+                _try_write(memory / "memory.memsw.limit_in_bytes", str(memory_bytes))
             _try_write(memory / "memory.swappiness", "0")
         pids = self._pids_dir()
         if pids is not None:

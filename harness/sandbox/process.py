@@ -14,9 +14,9 @@ import time
 
 from .base import Limits, StepResult
 from .cgroups import Cgroup, CgroupFactory
-
-# Bytes of stdout/stderr kept for diagnostics; the output limit counts everything produced.
-KEEP_BYTES = 8192
+# Bytes of stdout/stderr kept for diagnostics (the output limit counts everything produced),
+# kept the same way as inside the warm sandboxes.
+from .step_supervisor import KEEP_BYTES, keep_tail
 
 
 def run_limited(
@@ -150,10 +150,7 @@ def _collect(proc: subprocess.Popen, limits: Limits, started: float):
                     selector.unregister(key.fileobj)
                     continue
                 total += len(chunk)
-                buffer = buffers[key.fileobj]
-                buffer += chunk
-                if len(buffer) > 2 * KEEP_BYTES:
-                    del buffer[: len(buffer) - KEEP_BYTES]
+                keep_tail(buffers[key.fileobj], chunk)
                 if total > cap:
                     flooded = True
                     break

@@ -32,7 +32,7 @@ import time
 
 WORK = "/work"
 SCRATCH = ("/tmp", "/dev/shm")
-KEEP_BYTES = 8192  # output kept for diagnostics, as in harness/sandbox/process.py
+KEEP_BYTES = 8192  # output kept for diagnostics (harness/sandbox/process.py uses these too)
 PR_SET_DUMPABLE = 4
 LIBC = ctypes.CDLL(None)
 IGNORED = [s for s in (signal.SIGINT, signal.SIGTERM, signal.SIGHUP, signal.SIGQUIT, signal.SIGUSR1,
@@ -217,10 +217,7 @@ def collect(proc, limits, started):
                     selector.unregister(key.fileobj)
                     continue
                 total += len(chunk)
-                buffer = buffers[key.fileobj]
-                buffer += chunk
-                if len(buffer) > 2 * KEEP_BYTES:
-                    del buffer[: len(buffer) - KEEP_BYTES]
+                keep_tail(buffers[key.fileobj], chunk)
                 if total > cap:
                     flooded = True
                     break
@@ -247,6 +244,13 @@ def collect(proc, limits, started):
     for stream in buffers:
         stream.close()
     return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded, left_running
+
+
+def keep_tail(buffer, chunk):
+    """Append ``chunk`` to ``buffer``, keeping about its last KEEP_BYTES (trimmed in batches)."""
+    buffer += chunk
+    if len(buffer) > 2 * KEEP_BYTES:
+        del buffer[: len(buffer) - KEEP_BYTES]
 
 
 def kill_group(pgid):

@@ -9,6 +9,7 @@ thrown away. The rules for when a sandbox may serve the next candidate live here
 
 from __future__ import annotations
 
+import abc
 import base64
 import concurrent.futures as futures
 import json
@@ -62,10 +63,10 @@ def brief(exc: BaseException) -> str:
 
 # --- the channel ------------------------------------------------------------------------------
 
-class Channel:
+class Channel(abc.ABC):
     """JSON lines to the supervisor and its replies, matched by sequence number. Requests may
     be pipelined: ``send`` now, ``receive`` the reply later (replies come in order).
-    Subclasses say how bytes travel: ``_send_bytes`` and ``_line``."""
+    Subclasses say how bytes travel: ``_send_bytes``, ``_line`` and ``close``."""
 
     def __init__(self):
         self.seq = 0
@@ -93,14 +94,17 @@ class Channel:
             raise SupervisorError(f"supervisor: {reply.get('error')}")
         return reply
 
+    @abc.abstractmethod
     def _send_bytes(self, data: bytes) -> None:
-        raise NotImplementedError
+        """Deliver ``data`` to the supervisor's stdin, or raise ChannelLost."""
 
+    @abc.abstractmethod
     def _line(self, deadline: float) -> bytes:
-        raise NotImplementedError
+        """The supervisor's next output line, or ChannelLost once ``deadline`` passes."""
 
+    @abc.abstractmethod
     def close(self) -> None:
-        raise NotImplementedError
+        """Release the transport; the supervisor sees its stdin close and exits."""
 
 
 class PipeChannel(Channel):
