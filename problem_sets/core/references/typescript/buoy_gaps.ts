@@ -1,0 +1,2 @@
+return positions.slice(1).map((position, i) => position - positions[i]);
+}

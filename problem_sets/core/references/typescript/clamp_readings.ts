@@ -1,0 +1,6 @@
+return values.map((value) => {
+  if (low !== null && value < low) return low;
+  if (high !== null && value > high) return high;
+  return value;
+});
+}

@@ -1,0 +1,5 @@
+return text
+  .split(/[ \t\n]+/)
+  .filter((part) => part !== "")
+  .join(" ");
+}

@@ -1,0 +1,3 @@
+if (name === null || name === "") return `Crate #${number}`;
+return `${name} #${number}`;
+}

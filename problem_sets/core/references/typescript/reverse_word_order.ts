@@ -1,0 +1,6 @@
+return line
+  .split(" ")
+  .filter((word) => word !== "")
+  .reverse()
+  .join(" ");
+}

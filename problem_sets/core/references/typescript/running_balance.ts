@@ -1,0 +1,3 @@
+let balance = 0n;
+return deltas.map((delta) => (balance += delta));
+}
