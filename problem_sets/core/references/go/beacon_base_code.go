@@ -1,0 +1,3 @@
+// FormatInt writes lowercase digits and a leading "-", and handles math.MinInt64.
+return strconv.FormatInt(n, int(base))
+}

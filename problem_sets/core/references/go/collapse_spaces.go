@@ -1,0 +1,5 @@
+words := strings.FieldsFunc(text, func(r rune) bool {
+	return r == ' ' || r == '\t' || r == '\n'
+})
+return strings.Join(words, " ")
+}
