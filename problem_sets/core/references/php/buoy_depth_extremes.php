@@ -1,0 +1,5 @@
+if ($values === []) {
+    return null;
+}
+return [min($values), max($values)];
+}

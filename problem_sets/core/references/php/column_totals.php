@@ -1,0 +1,8 @@
+$totals = [];
+foreach ($grid as $row) {
+    foreach ($row as $j => $value) {
+        $totals[$j] = ($totals[$j] ?? 0) + $value;
+    }
+}
+return $totals;
+}

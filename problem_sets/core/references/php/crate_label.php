@@ -1,0 +1,2 @@
+return ($name === null || $name === '' ? 'Crate' : $name) . ' #' . $number;
+}

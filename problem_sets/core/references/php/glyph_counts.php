@@ -1,0 +1,2 @@
+return array_count_values(mb_str_split($text));
+}

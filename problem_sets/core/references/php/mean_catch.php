@@ -1,0 +1,5 @@
+if ($weights === []) {
+    return null;
+}
+return array_sum($weights) / count($weights);
+}

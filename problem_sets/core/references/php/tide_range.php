@@ -1,0 +1,5 @@
+if ($readings === []) {
+    return 0;
+}
+return max($readings) - min($readings);
+}
