@@ -1,0 +1,2 @@
+  return n > 0 and (n & (n - 1)) == 0
+end
