@@ -1,8 +1,15 @@
 """Hostile candidates: each must get a non-passed verdict of the right kind, within the limits,
-with the host untouched and the next candidate unaffected. Corpora: tests/adversarial/<runtime>.yaml."""
+with the host untouched and the next candidate unaffected. Corpora: tests/adversarial/<runtime>.yaml.
+
+An attack's optional ``problem`` names the problem it answers (default ``add_pair``, int result):
+``mean_draught`` has a float result and ``berth_label`` a string one, for results no type can
+hold. The control runs next in the same warm sandbox and must pass; a corpus's control may look
+for state an attack planted there (files, IPC objects, keys) and fail if it finds any."""
 
 import errno
+import glob
 import os
+import secrets
 import socket
 import subprocess
 import time
@@ -16,9 +23,46 @@ from harness.execution import Executor
 from harness.problems import load_problem_set
 from harness.runtimes import indent_lines, load_runtime
 from harness.sandbox import make_sandbox
+from tests.conftest import ADD_PAIR, write_set
 
 CORPUS_DIR = Path(__file__).parent / "adversarial"
 LIMITS = {"wall_seconds": 4, "cpu_seconds": 4, "memory_mb": 192, "max_processes": 48}
+SECRET_NAME = "ASSAY_ADVERSARIAL_SECRET"  # set in the harness's environment while the tests run
+
+MEAN_DRAUGHT = """\
+id: mean_draught
+title: Mean draught
+difficulty: easy
+tags: [math]
+description: A hull's draught is read at the bow and at the stern, in centimetres. Return the mean of the two readings.
+signature:
+  name: mean_draught
+  params: [{name: bow, type: int}, {name: stern, type: int}]
+  returns: float
+cases:
+  - {args: [610, 640], expected: 625.0, example: true}
+  - {args: [0, 1], expected: 0.5}
+  - {args: [455, 455], expected: 455.0}
+"""
+
+BERTH_LABEL = """\
+id: berth_label
+title: Berth label
+difficulty: easy
+tags: [strings]
+description: Return the label painted on a berth, `berth ` followed by the berth's `name`.
+signature:
+  name: berth_label
+  params: [{name: name, type: str}]
+  returns: str
+cases:
+  - {args: [north], expected: berth north, example: true}
+  - {args: [K7], expected: berth K7}
+"""
+
+# Attacks that currently get through, by (runtime, attack name) and backend: each is marked as
+# an expected failure (strict, so the mark must go once the sandbox stops it).
+KNOWN_ESCAPES: dict[tuple[str, str], dict[str, str]] = {}
 
 
 def corpus_entries():
@@ -26,6 +70,12 @@ def corpus_entries():
         data = yaml.safe_load(path.read_text(encoding="utf-8"))
         for attack in data["attacks"]:
             yield pytest.param(path.stem, data["control"], attack, id=f"{path.stem}: {attack['name']}")
+
+
+@pytest.fixture
+def hostile_set(tmp_path):
+    return write_set(tmp_path / "hostile", {"add_pair.yaml": ADD_PAIR, "mean_draught.yaml": MEAN_DRAUGHT,
+                                            "berth_label.yaml": BERTH_LABEL})
 
 
 def backends():
@@ -41,7 +91,7 @@ def backends():
 
 
 @pytest.fixture(scope="module", params=backends())
-def backend(request):
+def backend(request, host):  # after host: the sandboxes start with the secret in the environment
     box = make_sandbox(request.param)
     box.check()
     yield box
@@ -61,14 +111,22 @@ def host(tmp_path_factory):
     listener.bind(("127.0.0.1", 0))
     listener.listen(8)
     listener.setblocking(False)
-    yield {"marker": marker, "outside": outside, "listener": listener, "atime": marker.stat().st_atime}
+    secret = secrets.token_hex(16)
+    saved = os.environ.get(SECRET_NAME)
+    os.environ[SECRET_NAME] = secret
+    yield {"marker": marker, "outside": outside, "listener": listener, "atime": marker.stat().st_atime,
+           "secret": secret}
     listener.close()
+    if saved is None:
+        os.environ.pop(SECRET_NAME, None)
+    else:
+        os.environ[SECRET_NAME] = saved
 
 
 def fill(text: str, host: dict, tag: str) -> str:
     return text.format(
         marker=host["marker"], outside=host["outside"], port=host["listener"].getsockname()[1],
-        harness_pid=os.getpid(), tag=tag, deep_nesting="(" * 5000 + "1" + ")" * 5000,
+        harness_pid=os.getpid(), tag=tag, secret_name=SECRET_NAME, deep_nesting="(" * 5000 + "1" + ")" * 5000,
         huge_source="filler = [" + "1, " * 250_000 + "]",
     )
 
@@ -91,22 +149,31 @@ def leftover_files(backend) -> list[Path]:
     return found + [path for folder in warm for path in folder.iterdir()]
 
 
+def planted_on_host(tag: str) -> list[str]:
+    """Files named after the attack's tag in the host's temporary and shared-memory folders."""
+    return [path for folder in ("/tmp", "/var/tmp", "/dev/shm") for path in glob.glob(f"{folder}/*{tag}*")]
+
+
 @pytest.mark.parametrize("language,control,attack", list(corpus_entries()))
-def test_hostile_candidate_is_contained(language, control, attack, backend, host, tiny_set):
+def test_hostile_candidate_is_contained(language, control, attack, backend, host, hostile_set, request):
     runtime = load_runtime(language)
     if runtime.toolchain_version() is None and not os.environ.get("CI"):
         pytest.skip(f"{language} toolchain not installed here")
-    executor = Executor(backend, load_problem_set(str(tiny_set)), {language: runtime}, limit_overrides=LIMITS,
+    known = KNOWN_ESCAPES.get((language, attack["name"]), {}).get(backend.name)
+    if known:
+        request.node.add_marker(pytest.mark.xfail(reason=known, strict=True))
+    executor = Executor(backend, load_problem_set(str(hostile_set)), {language: runtime}, limit_overrides=LIMITS,
                         infra_retries=0)
     tag = f"assay-orphan-{os.getpid()}-{time.time_ns()}"
 
-    def run(completion: str):
+    def run(completion: str, problem: str = "add_pair"):
         text = indent_lines(fill(completion, host, tag), runtime.reference_indent) + "\n"
-        return executor.execute(Sample("add_pair", language, 0, text, "corpus", 0))
+        return executor.execute(Sample(problem, language, 0, text, "corpus", 0))
 
     started = time.monotonic()
-    verdict = run(attack["completion"])
+    verdict = run(attack["completion"], attack.get("problem", "add_pair"))
     assert verdict.outcome in attack["expect"], f"{verdict.outcome}: {verdict.detail}"
+    assert host["secret"] not in verdict.detail, "the harness's secret reached the verdict"
     assert time.monotonic() - started < 60 + 2 * LIMITS["wall_seconds"]
 
     # The host is untouched.
@@ -114,6 +181,7 @@ def test_hostile_candidate_is_contained(language, control, attack, backend, host
     assert marker.stat().st_atime == host["atime"], "the marker was read"
     assert marker.stat().st_size == len("do not read"), "the marker was changed"
     assert list(host["outside"].iterdir()) == []
+    assert planted_on_host(tag) == [], "files planted in the host's temporary folders"
     with pytest.raises(OSError) as no_connection:
         host["listener"].accept()
     assert no_connection.value.errno in (errno.EAGAIN, errno.EWOULDBLOCK)
