@@ -1,0 +1,3 @@
+# Integer#to_s writes lowercase digits and a leading "-" for negative values.
+n.to_s(base)
+end

@@ -1,0 +1,2 @@
+values.empty? ? nil : values.minmax
+end

@@ -1,0 +1,2 @@
+positions.each_cons(2).map { |before, after| after - before }
+end

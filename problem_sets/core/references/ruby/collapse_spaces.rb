@@ -1,0 +1,2 @@
+text.split(/[ \t\n]+/).reject(&:empty?).join(" ")
+end

@@ -1,0 +1,4 @@
+return "Crate ##{number}" if name.nil? || name.empty?
+
+"#{name} ##{number}"
+end

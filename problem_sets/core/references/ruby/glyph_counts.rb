@@ -1,0 +1,2 @@
+text.each_char.tally
+end

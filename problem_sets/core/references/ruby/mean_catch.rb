@@ -1,0 +1,4 @@
+return nil if weights.empty?
+
+weights.sum / weights.size
+end

@@ -1,0 +1,2 @@
+a.merge(b) { |_ship, count_a, count_b| count_a + count_b }
+end

@@ -1,0 +1,3 @@
+# Array#rotate takes the count modulo the length and leaves an empty array empty.
+crew.rotate(k)
+end

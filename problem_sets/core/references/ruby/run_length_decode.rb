@@ -1,0 +1,2 @@
+code.scan(/([0-9]+)([^0-9])/).map { |count, char| char * count.to_i }.join
+end

@@ -1,0 +1,3 @@
+balance = 0
+deltas.map { |delta| balance += delta }
+end

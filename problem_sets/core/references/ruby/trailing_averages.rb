@@ -1,0 +1,2 @@
+values.each_cons(window).map { |group| group.sum / window }
+end
