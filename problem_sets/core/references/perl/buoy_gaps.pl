@@ -1,0 +1,2 @@
+    return [map { $positions->[$_] - $positions->[$_ - 1] } 1 .. $#$positions];
+}

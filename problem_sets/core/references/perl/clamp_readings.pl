@@ -1,0 +1,8 @@
+    return [
+        map {
+            defined $low && $_ < $low ? $low
+            : defined $high && $_ > $high ? $high
+            : $_
+        } @$values
+    ];
+}

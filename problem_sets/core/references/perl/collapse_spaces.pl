@@ -1,0 +1,2 @@
+    return join ' ', grep { length } split /[ \t\n]+/, $text;
+}

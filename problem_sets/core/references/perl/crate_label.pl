@@ -1,0 +1,2 @@
+    return (defined $name && length $name ? $name : 'Crate') . " #$number";
+}

@@ -1,0 +1,6 @@
+    my %seen;
+    for my $code (@$tickets) {
+        return $code if $seen{$code}++;
+    }
+    return undef;
+}

@@ -1,0 +1,4 @@
+    my %counts;
+    $counts{$_}++ for split //, $text;
+    return \%counts;
+}

@@ -1,0 +1,14 @@
+    return [] unless @$a;
+    my $columns = @{ $b->[0] };
+    my @product;
+    for my $row (@$a) {
+        my @cells;
+        for my $j (0 .. $columns - 1) {
+            my $sum = 0;
+            $sum += $row->[$_] * $b->[$_][$j] for 0 .. $#$row;
+            push @cells, $sum;
+        }
+        push @product, \@cells;
+    }
+    return \@product;
+}

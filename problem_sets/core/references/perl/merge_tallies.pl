@@ -1,0 +1,4 @@
+    my %merged = %$a;
+    $merged{$_} += $b->{$_} for keys %$b;
+    return \%merged;
+}

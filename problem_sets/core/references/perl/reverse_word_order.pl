@@ -1,0 +1,2 @@
+    return join ' ', reverse grep { length } split / +/, $line;
+}

@@ -1,0 +1,3 @@
+    # Each match is a maximal run: a character followed by more of the same.
+    return $text =~ s/((.)\2*)/length($1) . $2/gesr;
+}

@@ -1,0 +1,3 @@
+    my $balance = 0;
+    return [map { $balance += $_ } @$deltas];
+}
