@@ -33,7 +33,7 @@ from pathlib import Path
 from . import cgroups
 from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
 from .cgroups import Cgroup
-from .local import BASE_PATH, LocalSandbox, LocalWorkspace, candidate_env, private_folder
+from .local import BASE_PATH, LOG, LocalSandbox, LocalWorkspace, candidate_env, private_folder, remove_folder
 from .process import join_and_drop, run_limited
 from .supervised import (
     AGENT_SOURCE,
@@ -193,18 +193,28 @@ class BubblewrapSandbox(LocalSandbox):
         self.pool_for(needs).warm(count)
 
     def close(self) -> None:
+        """End every warm sandbox and remove every folder. Never raises (it runs in the
+        ``finally`` of a whole run): what fails is logged and noted in ``cleanup_problems``."""
         with self._lock:
             if self.closed:
                 return
             self.closed = True
         for pool in list(self.pools.values()):
             for slot in pool.drain():
-                self.discard(slot)
-        self._executor.shutdown(wait=True)
-        self._launcher.shutdown(wait=True)
+                self.guarded("ending a warm sandbox", lambda: self.discard(slot))
+        self.guarded("waiting for the clean-up", lambda: self._executor.shutdown(wait=True))
+        self.guarded("stopping the launcher", lambda: self._launcher.shutdown(wait=True))
         super().close()
         with contextlib.suppress(Exception):
             atexit.unregister(self.close)
+
+    def guarded(self, what: str, job) -> None:
+        try:
+            job()
+        except Exception as exc:  # noqa: BLE001 - logged and noted; the run goes on
+            problem = f"{what}: {type(exc).__name__}: {exc}"[:500]
+            LOG.warning("assay: bubblewrap sandbox: %s", problem)
+            self.note(problem)
 
     # -- warm sandboxes --
     def pool_for(self, needs: RuntimeSandboxNeeds) -> WarmPool:
@@ -234,8 +244,8 @@ class BubblewrapSandbox(LocalSandbox):
             ).result()
         except BaseException:
             if group is not None:
-                group.remove()
-            shutil.rmtree(folder, ignore_errors=True)
+                self.guarded("removing a cgroup", group.remove)
+            self.note(remove_folder(folder))
             raise
         slot = Slot(channel=PipeChannel(process.stdin, process.stdout, process.stderr), process=process,
                     folder=folder, cgroup=group, memory=memory, processes=processes)
@@ -269,7 +279,7 @@ class BubblewrapSandbox(LocalSandbox):
 
     def discard(self, slot: Slot) -> None:
         """End a sandbox at once (killing bubblewrap's process takes its pid 1, and so the whole
-        pid namespace, with it); its cgroup and folder go in the background."""
+        pid namespace, with it); its cgroup and folder go in the background. Never raises."""
         slot.channel.close()
         with contextlib.suppress(ProcessLookupError, PermissionError):
             os.killpg(slot.process.pid, signal.SIGKILL)
@@ -278,8 +288,8 @@ class BubblewrapSandbox(LocalSandbox):
             with contextlib.suppress(subprocess.TimeoutExpired):
                 slot.process.wait(timeout=30)
             if slot.cgroup is not None:
-                slot.cgroup.remove()
-            shutil.rmtree(slot.folder, ignore_errors=True)
+                self.guarded("removing a cgroup", slot.cgroup.remove)
+            self.note(remove_folder(slot.folder))  # however deep a tree the candidate left
 
         self.background(clean_up)
 

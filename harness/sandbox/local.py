@@ -4,13 +4,16 @@
 from __future__ import annotations
 
 import contextlib
+import logging
 import os
-import shutil
 import stat
 import tempfile
 from pathlib import Path
 
 from .base import RuntimeSandboxNeeds
+from .step_supervisor import remove_tree
+
+LOG = logging.getLogger("assay.sandbox")
 
 BASE_PATH = "/usr/local/bin:/usr/bin:/bin"
 
@@ -60,8 +63,22 @@ class LocalWorkspace:
                 return None
             return handle.read(max_bytes)
 
-    def remove(self) -> None:
-        shutil.rmtree(self.path, ignore_errors=True)
+    def remove(self) -> str | None:
+        """Remove the folder; what went wrong, if anything, as a message (logged too)."""
+        return remove_folder(self.path)
+
+
+def remove_folder(path: Path) -> str | None:
+    """Remove a host folder a candidate wrote into, however deep or odd its tree (see
+    ``remove_tree``); a failure is logged and returned, never raised, so cleaning up can
+    neither stop a run nor turn into a candidate's verdict."""
+    try:
+        remove_tree(str(path))
+    except Exception as exc:  # noqa: BLE001 - whatever it was, the run goes on
+        problem = f"could not remove {path}: {type(exc).__name__}: {exc}"[:500]
+        LOG.warning("assay: %s", problem)
+        return problem
+    return None
 
 
 def candidate_env(needs: RuntimeSandboxNeeds, env: dict[str, str], home: str, tmp: str) -> dict[str, str]:
@@ -80,6 +97,7 @@ class LocalSandbox:
     def __init__(self, work_root: Path | None, prefix: str):
         # One folder per sandbox object, so two sandboxes in one process never share it.
         self.work_root = Path(tempfile.mkdtemp(prefix=prefix, dir=work_root or default_work_root()))
+        self.cleanup_problems: list[str] = []  # folders that could not be removed, for the record
 
     @contextlib.contextmanager
     def workspace(self, needs: RuntimeSandboxNeeds):
@@ -87,7 +105,12 @@ class LocalSandbox:
         try:
             yield space
         finally:
-            space.remove()
+            self.note(space.remove())
+
+    def note(self, problem: str | None) -> None:
+        if problem:
+            self.cleanup_problems.append(problem)
 
     def close(self) -> None:
-        shutil.rmtree(self.work_root, ignore_errors=True)
+        """Never raises: a folder that cannot be removed is logged and noted."""
+        self.note(remove_folder(self.work_root))

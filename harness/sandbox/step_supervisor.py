@@ -311,7 +311,7 @@ def empty_folder(top):
     for name in names:
         try:
             remove_tree(os.path.join(top, name))
-        except (OSError, RecursionError) as exc:
+        except OSError as exc:
             problems.append("%s: %s" % (os.path.join(top, name), exc))
     return problems
 
@@ -333,15 +333,126 @@ def ipc_objects():
     return found
 
 
+DIR_FLAGS = os.O_RDONLY | os.O_DIRECTORY | os.O_NOFOLLOW | os.O_CLOEXEC
+
+
 def remove_tree(path):
-    info = os.lstat(path)
-    if stat.S_ISDIR(info.st_mode):
-        os.chmod(path, 0o700)
-        for name in os.listdir(path):
-            remove_tree(os.path.join(path, name))
-        os.rmdir(path)
-    else:
+    """Remove ``path`` and everything below it, however deep, following no link.
+
+    Iterative, with at most two directories open at once: every directory met is moved up
+    into the one being removed and emptied from there. A recursive walk (``shutil.rmtree`` in
+    Python 3.11 too) fails with RecursionError on a tree a few thousand levels deep, and
+    would need a descriptor per level. Raises OSError for what cannot be removed."""
+    try:
+        info = os.lstat(path)
+    except FileNotFoundError:
+        return
+    if not stat.S_ISDIR(info.st_mode):
         os.unlink(path)
+        return
+    parent, name = os.path.split(os.path.abspath(path))
+    parent_fd = os.open(parent, DIR_FLAGS)
+    try:
+        top = open_directory(name, parent_fd)
+        try:
+            empty_directory(top)
+        finally:
+            os.close(top)
+        os.rmdir(name, dir_fd=parent_fd)
+    finally:
+        os.close(parent_fd)
+
+
+def empty_directory(top):
+    """Remove everything inside the directory open as ``top`` (see ``remove_tree``)."""
+    make_writable(top)
+    serial = 0
+    while True:
+        subdirectories = []
+        for name in os.listdir(top):
+            if is_directory(name, top):
+                subdirectories.append(name)
+            else:
+                unlink_quietly(name, top)
+        if not subdirectories:
+            return
+        for name in subdirectories:
+            try:
+                sub = open_directory(name, top)
+            except FileNotFoundError:
+                continue
+            try:
+                make_writable(sub)
+                for entry in os.listdir(sub):
+                    if is_directory(entry, sub):
+                        # Moving a folder to a new parent rewrites its "..": it must be writable.
+                        grant_owner_rights(entry, sub)
+                        serial += 1
+                        while exists(".assay-rm-%d" % serial, top):
+                            serial += 1
+                        os.rename(entry, ".assay-rm-%d" % serial, src_dir_fd=sub, dst_dir_fd=top)
+                    else:
+                        unlink_quietly(entry, sub)
+            finally:
+                os.close(sub)
+            os.rmdir(name, dir_fd=top)
+
+
+def is_directory(name, dir_fd):
+    try:
+        return stat.S_ISDIR(os.stat(name, dir_fd=dir_fd, follow_symlinks=False).st_mode)
+    except FileNotFoundError:
+        return False
+
+
+def exists(name, dir_fd):
+    try:
+        os.stat(name, dir_fd=dir_fd, follow_symlinks=False)
+    except FileNotFoundError:
+        return False
+    return True
+
+
+def unlink_quietly(name, dir_fd):
+    try:
+        os.unlink(name, dir_fd=dir_fd)
+    except FileNotFoundError:
+        pass
+
+
+def open_directory(name, dir_fd):
+    """Open the directory ``name`` in ``dir_fd`` (never through a link), first making it
+    readable when its owner (this user) took its permissions away."""
+    try:
+        return os.open(name, DIR_FLAGS, dir_fd=dir_fd)
+    except PermissionError:
+        grant_owner_rights(name, dir_fd)
+    return os.open(name, DIR_FLAGS, dir_fd=dir_fd)
+
+
+def grant_owner_rights(name, dir_fd):
+    """Give the directory ``name`` in ``dir_fd`` rwx for its owner, where it lacks them and
+    this user owns it (root needs none). Through an O_PATH handle, so never through a link."""
+    handle = os.open(name, os.O_PATH | os.O_DIRECTORY | os.O_NOFOLLOW | os.O_CLOEXEC, dir_fd=dir_fd)
+    try:
+        info = os.fstat(handle)
+        if stat.S_IMODE(info.st_mode) & 0o700 == 0o700 or info.st_uid != os.geteuid():
+            return
+        try:
+            os.chmod("/proc/self/fd/%d" % handle, 0o700)  # the directory itself, by its handle
+        except FileNotFoundError:  # no /proc: by name (it was a directory a moment ago)
+            os.chmod(name, 0o700, dir_fd=dir_fd)
+    finally:
+        os.close(handle)
+
+
+def make_writable(fd):
+    """Owner rights on an open directory, so its entries can be listed and removed."""
+    try:
+        if stat.S_IMODE(os.fstat(fd).st_mode) & 0o700 != 0o700:
+            os.fchmod(fd, 0o700)
+    except OSError:
+        pass  # not ours: whatever cannot be removed is reported by the caller
 
 
 def main():
