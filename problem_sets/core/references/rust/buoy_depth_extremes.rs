@@ -1,0 +1,4 @@
+let low = *values.iter().min()?;
+let high = *values.iter().max()?;
+Some((low, high))
+}

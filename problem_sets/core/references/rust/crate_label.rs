@@ -1,0 +1,5 @@
+match name {
+    Some(name) if !name.is_empty() => format!("{} #{}", name, number),
+    _ => format!("Crate #{}", number),
+}
+}

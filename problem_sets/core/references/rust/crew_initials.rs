@@ -1,0 +1,6 @@
+full_name
+    .split(' ')
+    .filter_map(|word| word.chars().next())
+    .map(|first| first.to_ascii_uppercase())
+    .collect()
+}

@@ -1,0 +1,2 @@
+mask.count_ones() as i64
+}

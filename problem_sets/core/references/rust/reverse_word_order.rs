@@ -1,0 +1,6 @@
+line.split(' ')
+    .filter(|word| !word.is_empty())
+    .rev()
+    .collect::<Vec<_>>()
+    .join(" ")
+}

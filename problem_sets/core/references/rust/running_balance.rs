@@ -1,0 +1,8 @@
+deltas
+    .iter()
+    .scan(0, |balance, delta| {
+        *balance += delta;
+        Some(*balance)
+    })
+    .collect()
+}

@@ -1,0 +1,3 @@
+let top = *values.iter().max()?;
+values.into_iter().filter(|&value| value < top).max()
+}
