@@ -1,0 +1,6 @@
+    if (values.Count == 0)
+    {
+        return null;
+    }
+    return (values.Min(), values.Max());
+}

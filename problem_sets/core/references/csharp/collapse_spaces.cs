@@ -1,0 +1,3 @@
+    var words = text.Split(new[] { ' ', '\t', '\n' }, StringSplitOptions.RemoveEmptyEntries);
+    return string.Join(" ", words);
+}

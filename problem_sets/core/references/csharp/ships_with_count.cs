@@ -1,0 +1,18 @@
+    // Code point order. Ordinal comparison orders UTF-16 units, which puts a surrogate (part
+    // of a code point above U+FFFF) before U+E000..U+FFFF; ranking surrogates last fixes that.
+    Func<char, int> rank = ch => ch >= 0xD800 && ch <= 0xDFFF ? ch + 0x2000 : ch >= 0xE000 ? ch - 0x800 : ch;
+    Comparison<string> byCodePoint = (x, y) =>
+    {
+        for (int i = 0; i < x.Length && i < y.Length; i++)
+        {
+            if (x[i] != y[i])
+            {
+                return rank(x[i]) - rank(y[i]);
+            }
+        }
+        return x.Length - y.Length;
+    };
+    var names = tally.Where(entry => entry.Value == target).Select(entry => entry.Key).ToList();
+    names.Sort(byCodePoint);
+    return names;
+}
