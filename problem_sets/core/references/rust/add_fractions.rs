@@ -1,6 +1,4 @@
-// Sums of up to ten denominators of up to 1000 outgrow i64 before they are reduced, so the
-// arithmetic runs in i128 and only the reduced result is narrowed.
-fn gcd(mut a: i128, mut b: i128) -> i128 {
+fn gcd(mut a: i64, mut b: i64) -> i64 {
     a = a.abs();
     b = b.abs();
     while b != 0 {
@@ -10,10 +8,11 @@ fn gcd(mut a: i128, mut b: i128) -> i128 {
     }
     a
 }
-let mut num: i128 = 0;
-let mut den: i128 = 1;
+// Reducing after every step keeps the denominator a divisor of the denominators' least
+// common multiple, so every intermediate value stays small.
+let mut num: i64 = 0;
+let mut den: i64 = 1;
 for (p, q) in fracs {
-    let (p, q) = (i128::from(p), i128::from(q));
     num = num * q + p * den;
     den *= q;
     if den < 0 {
@@ -24,5 +23,5 @@ for (p, q) in fracs {
     num /= g;
     den /= g;
 }
-(num as i64, den as i64)
+(num, den)
 }
