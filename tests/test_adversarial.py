@@ -67,6 +67,8 @@ KEYRING_ESCAPE = ("no seccomp filter under bubblewrap: add_key succeeds and the 
 KNOWN_ESCAPES: dict[tuple[str, str], dict[str, str]] = {
     ("ruby", "adds a key named after the tag to its user keyring (add_key through Fiddle)"):
         {"bubblewrap": KEYRING_ESCAPE},
+    ("perl", "adds a key named after the tag to its user keyring (add_key through syscall())"):
+        {"bubblewrap": KEYRING_ESCAPE},
 }
 
 
