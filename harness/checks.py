@@ -20,7 +20,11 @@ def check_references(problem_set: ProblemSet, runtimes: dict[str, Runtime], sand
     samples, results = [], []
     for problem in problem_set.problems.values():
         for language in runtimes:
-            if language in problem.reference:
+            reason = runtimes[language].refusal(problem)
+            if reason:
+                results.append({"problem": problem.id, "language": language, "outcome": "unsupported",
+                                "detail": reason})
+            elif language in problem.reference:
                 completion = runtimes[language].reference_completion(problem)
                 samples.append(Sample(problem.id, language, 0, completion, str(problem.source), 0))
             else:
@@ -31,6 +35,35 @@ def check_references(problem_set: ProblemSet, runtimes: dict[str, Runtime], sand
             results.append({"problem": sample.problem, "language": sample.language, "outcome": verdict.outcome,
                             "detail": verdict.detail, "seconds": verdict.seconds})
     return sorted(results, key=lambda r: (r["problem"], r["language"]))
+
+
+def problem_warnings(problem_set: ProblemSet, runtimes: dict[str, Runtime]) -> list[str]:
+    """What a set's author should know before scoring: names that some runtime must rename
+    because they are reserved words there, and zero float expectations that only an exact zero
+    meets (PEP 485's default absolute tolerance is 0)."""
+    warnings = []
+    for problem in problem_set.problems.values():
+        for runtime in runtimes.values():
+            for snake, shown in runtime.renamed(problem):
+                warnings.append(f"{problem.source}: {snake!r} is reserved in {runtime.name}; its prompt says {shown!r}")
+        if problem.tolerance.abs == 0 and any(_zero_floats(c.expected, problem.returns) for c in problem.cases):
+            warnings.append(f"{problem.source}: a float result of 0 is expected with tolerance.abs 0, so rounding"
+                            " noise such as 1e-17 fails; declare tolerance: {abs: ...} if that is not meant")
+    return warnings
+
+
+def _zero_floats(value, typ) -> bool:
+    if value is None:
+        return False
+    if typ.kind == "float":
+        return value == 0
+    if typ.kind in ("list", "optional"):
+        return any(_zero_floats(v, typ.elem) for v in (value if typ.kind == "list" else [value]))
+    if typ.kind == "tuple":
+        return any(_zero_floats(v, t) for v, t in zip(value, typ.args))
+    if typ.kind == "dict":
+        return any(_zero_floats(v, typ.elem) for v in value.values())
+    return False
 
 
 CONFORMANCE_SET = "conformance"
@@ -61,6 +94,11 @@ def check_runtime(runtime: Runtime, problem_set: ProblemSet, sandbox: Sandbox, j
     jobs_list: list[tuple[str, str, Sample]] = []
     rows: list[dict] = []
     for problem in problem_set.problems.values():
+        reason = runtime.refusal(problem)
+        if reason:
+            rows.append({"check": f"reference {problem.id}", "expect": "unsupported", "outcome": "unsupported",
+                         "detail": reason, "ok": True})
+            continue
         if runtime.name not in problem.reference:
             rows.append({"check": f"reference {problem.id}", "expect": "passed", "outcome": "missing",
                          "detail": f"no {runtime.name} reference", "ok": False})

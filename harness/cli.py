@@ -94,9 +94,14 @@ def prompts(
     runtimes = _load_runtimes(lang, runtimes_dir)
     output.parent.mkdir(parents=True, exist_ok=True)
     count = 0
+    refused = []
     with open(output, "w", encoding="utf-8") as handle:
         for runtime in runtimes.values():
             for problem in problem_set.problems.values():
+                reason = runtime.refusal(problem)
+                if reason:
+                    refused.append(reason)
+                    continue
                 row = {
                     "problem": problem.id,
                     "language": runtime.name,
@@ -106,8 +111,10 @@ def prompts(
                 }
                 handle.write(json.dumps(row, ensure_ascii=False) + "\n")
                 count += 1
-    typer.echo(f"wrote {count} prompts ({len(problem_set)} problems x {len(runtimes)} language(s)) to {output}",
-               err=True)
+    for reason in refused:
+        typer.echo(f"skipped: {reason}", err=True)
+    typer.echo(f"wrote {count} prompts ({len(problem_set)} problems x {len(runtimes)} language(s)"
+               + (f", {len(refused)} skipped" if refused else "") + f") to {output}", err=True)
 
 
 @app.command()
@@ -239,24 +246,28 @@ def problems_check(
     as_json: bool = typer.Option(False, "--json"),
 ) -> None:
     """Validate a set: the schema of every file, and every reference solution against every case."""
-    from .checks import check_references
+    from .checks import check_references, problem_warnings
 
     problem_set = _load_set(set_name)
     languages = lang or sorted({l for p in problem_set.problems.values() for l in p.reference}
                                & set(available_runtimes(runtimes_dir)))
     runtimes = _load_runtimes(languages, runtimes_dir)
+    warnings = problem_warnings(problem_set, _load_runtimes(available_runtimes(runtimes_dir), runtimes_dir))
     box = _make_sandbox(sandbox)
     try:
         results = check_references(problem_set, runtimes, box, jobs)
     finally:
         box.close()
-    failures = [r for r in results if r["outcome"] != "passed"]
+    failures = [r for r in results if r["outcome"] not in ("passed", "unsupported")]
     if as_json:
-        typer.echo(json.dumps({"set": problem_set.name, "results": results, "failed": len(failures)}, indent=2))
+        typer.echo(json.dumps({"set": problem_set.name, "results": results, "failed": len(failures),
+                               "warnings": warnings}, indent=2))
     else:
         colour = use_colour()
+        for warning in warnings:
+            typer.echo(f"warning: {warning}", err=True)
         for r in results:
-            mark = _check_mark(r["outcome"] == "passed", colour)
+            mark = _check_mark(r["outcome"] in ("passed", "unsupported"), colour)
             typer.echo(f"{mark} {r['problem']} [{r['language']}]" + (f": {r['outcome']}: {r['detail']}"
                                                                      if r["outcome"] != "passed" else ""))
         typer.echo(f"{problem_set.name}: {len(problem_set)} problems, {len(results)} reference checks, "

@@ -9,7 +9,7 @@ import json
 import re
 from dataclasses import dataclass
 from pathlib import Path
-from typing import Iterable, Iterator
+from typing import Callable, Iterable, Iterator
 
 MODES = ("continue", "whole")
 MAX_COMPLETION_BYTES = 1_000_000
@@ -76,10 +76,12 @@ def read_dumps(
     known_problems: set[str],
     known_languages: set[str],
     max_completion_bytes: int = MAX_COMPLETION_BYTES,
+    refusal: Callable[[str, str], str | None] | None = None,
 ) -> Iterator[Sample | Reject]:
     """Yield one Sample or Reject per line, in file order. A row without ``sample`` takes the
     index after the highest seen so far for its (problem, language) pair; a key seen before is
-    rejected as a duplicate."""
+    rejected as a duplicate. ``refusal(problem, language)`` names why a runtime cannot pose a
+    problem (a type it has no counterpart for); such rows are rejected with that reason."""
     seen = SampleKeySet()
     next_index: dict[tuple[str, str], int] = {}
     for path in paths:
@@ -87,6 +89,10 @@ def read_dumps(
         with open(path, "rb") as handle:
             for number, raw in enumerate(handle, start=1):
                 item = _parse_line(raw, source, number, known_problems, known_languages, max_completion_bytes)
+                if not isinstance(item, Reject) and refusal is not None:
+                    reason = refusal(item[0], item[1])
+                    if reason:
+                        item = Reject(source, number, reason)
                 if isinstance(item, Reject):
                     yield item
                     continue

@@ -8,6 +8,7 @@ from __future__ import annotations
 
 import hashlib
 import json
+import re
 import secrets
 import signal
 import time
@@ -18,7 +19,7 @@ from .completions import Sample, assemble_code
 from .problems import Problem, ProblemSet
 from .runtimes import Runtime
 from .sandbox.base import Limits, Sandbox, StepResult
-from .valuetypes import values_equal
+from .valuetypes import JsonObject, loads_reported, show, values_equal
 
 OUTCOMES = (
     "passed",
@@ -167,7 +168,11 @@ class Executor:
                 results = space.read(results_file, RESULTS_MAX_BYTES) or b""
         except Exception as exc:  # the sandbox itself broke: not the candidate's fault
             return Verdict("infra_error", 0, total, _since(started), f"sandbox failure: {exc}"[:DETAIL_CHARS])
-        verdict = judge(problem, runtime, ran, results, nonce, run_limits)
+        try:
+            verdict = judge(problem, runtime, ran, results, nonce, run_limits)
+        except Exception as exc:  # a judge bug must cost one sample a loud infra_error, never the run
+            return Verdict("infra_error", 0, total, _since(started),
+                           _clip(f"judging failed: {type(exc).__name__}: {exc}"))
         verdict.seconds = _since(started)
         if "peak_memory_mb" in ran.extra:
             verdict.extra["peak_memory_mb"] = ran.extra["peak_memory_mb"]
@@ -190,7 +195,7 @@ def _compile_failure(built: StepResult, limits: Limits, total: int, started: flo
     elif built.file_size_exceeded:
         detail = f"compiler wrote a file over {limits.max_file_mb} MB"
     elif built.exit_code != 0:
-        detail = _tail(built.stderr or built.stdout) or f"compiler exited with status {built.exit_code}"
+        detail = _first_error(built.stderr or built.stdout) or f"compiler exited with status {built.exit_code}"
     else:
         return None
     return Verdict("compile_error", 0, total, _since(started), detail)
@@ -198,19 +203,23 @@ def _compile_failure(built: StepResult, limits: Limits, total: int, started: flo
 
 def parse_results(data: bytes, nonce: str) -> tuple[dict[int, dict], bool]:
     """Case records by index, and whether the driver's ``done`` record arrived. Lines without
-    this run's nonce (anything the candidate may have written) are ignored."""
+    this run's nonce (anything the candidate may have written) are ignored. Values stay in the
+    wire format's reading (:func:`loads_reported`) for the judge."""
     records: dict[int, dict] = {}
     done = False
     for line in data.splitlines():
         try:
-            record = json.loads(line)
+            parsed = loads_reported(line)
         except (ValueError, RecursionError):
             continue
-        if not isinstance(record, dict) or record.get("nonce") != nonce:
+        if not isinstance(parsed, JsonObject):
+            continue
+        record = dict(parsed)
+        if record.get("nonce") != nonce:
             continue
         if record.get("done") is True:
             done = True
-        elif isinstance(record.get("case"), int) and not isinstance(record.get("case"), bool):
+        elif type(record.get("case")) is int:
             records.setdefault(record["case"], record)
     return records, done
 
@@ -227,18 +236,16 @@ def judge(problem: Problem, runtime: Runtime, ran: StepResult, results: bytes, n
             break
         if "error" in record:
             if first_failure is None:
-                message = str(record["error"])
-                outcome = _error_outcome(runtime, message)
-                first_failure = Verdict(outcome, 0, total, 0.0, f"case {index}: {message}"[:DETAIL_CHARS])
+                message = show_text(record["error"])
+                outcome, how = _error_outcome(runtime, message, ran, limits)
+                first_failure = Verdict(outcome, 0, total, 0.0, _clip(f"case {index}: {message}{how}"))
             continue
         if values_equal(case.expected, record.get("value"), problem.returns, problem.tolerance):
             passed += 1
         elif first_failure is None:
-            expected = json.dumps(case.expected, ensure_ascii=False)
-            actual = json.dumps(record.get("value"), ensure_ascii=False)
             first_failure = Verdict(
                 "wrong_answer", 0, total, 0.0,
-                _clip(f"case {index}: expected {expected}, got {actual}"),
+                _clip(f"case {index}: expected {show(case.expected)}, got {show(record.get('value'))}"),
             )
 
     def verdict(outcome: str, detail: str) -> Verdict:
@@ -268,18 +275,39 @@ def judge(problem: Problem, runtime: Runtime, ran: StepResult, results: bytes, n
         where = f"before case {missing} reported" if missing < total else "before the test driver finished"
         stderr = _tail(ran.stderr)
         # A runtime may die of a limit without reporting a case (a fatal out-of-memory abort).
-        outcome = _error_outcome(runtime, stderr) if stderr else "runtime_error"
-        return verdict(outcome, f"{how} {where}" + (f": {stderr}" if stderr else ""))
+        outcome, marked = _error_outcome(runtime, stderr, ran, limits) if stderr else ("runtime_error", "")
+        return verdict(outcome, f"{how} {where}" + (f": {stderr}" if stderr else "") + marked)
     if ran.exit_code != 0:
         return verdict("runtime_error", f"all cases reported, but the program exited with status {ran.exit_code}")
     return verdict("passed", "")
 
 
-def _error_outcome(runtime: Runtime, message: str) -> str:
+# A limit error message is believed only when the sandbox saw the step use at least this share
+# of its memory limit; a runtime's own heap cap (-Xmx and the like) sits below the limit.
+MESSAGE_EVIDENCE_SHARE = 0.5
+
+
+def _error_outcome(runtime: Runtime, message: str, ran: StepResult, limits: Limits) -> tuple[str, str]:
+    """The outcome a limit-like error message stands for, and a note for the detail.
+
+    Limits are decided from what the sandbox observed (OOM kills, signals, clocks). A message
+    matching the runtime's ``error_patterns`` is only a fallback: any candidate can raise an
+    exception that reads like an out-of-memory error. It counts as ``memory_limit`` when the
+    observed peak memory backs it, and when the sandbox cannot observe a peak, with the detail
+    saying so; with a peak well below the limit it is the candidate's own ``runtime_error``.
+    """
     for outcome in ("memory_limit", "timeout", "output_limit"):
-        if any(pattern in message for pattern in runtime.error_patterns.get(outcome, ())):
-            return outcome
-    return "runtime_error"
+        if not any(pattern in message for pattern in runtime.error_patterns.get(outcome, ())):
+            continue
+        peak = ran.extra.get("peak_memory_mb")
+        if outcome != "memory_limit":
+            return outcome, " [judged from the error message]"
+        if peak is None:
+            return outcome, " [judged from the error message: this sandbox reports no peak memory]"
+        if peak >= MESSAGE_EVIDENCE_SHARE * limits.memory_mb:
+            return outcome, f" [error message backed by a peak of {peak:g} MB]"
+        return "runtime_error", f" [reads like an out-of-memory error, but the peak was only {peak:g} MB]"
+    return "runtime_error", ""
 
 
 def _signal_name(number: int) -> str:
@@ -287,6 +315,22 @@ def _signal_name(number: int) -> str:
         return signal.Signals(number).name
     except ValueError:
         return str(number)
+
+
+def show_text(message: object) -> str:
+    """An error message from a results line as printable text (lone surrogates escaped)."""
+    text = message if isinstance(message, str) else show(message)
+    return text.encode("utf-8", "backslashreplace").decode("utf-8")
+
+
+def _first_error(text: str) -> str:
+    """A compiler's output from its first error on: echoed source lines and notes come after
+    the message that matters, and the first error is the one that explains the rest."""
+    lines = text.strip().splitlines()
+    for i, line in enumerate(lines):
+        if re.search(r"\berror\b", line, re.IGNORECASE):
+            return _clip("\n".join(lines[i:]))
+    return _clip("\n".join(lines))
 
 
 def _tail(text: str) -> str:

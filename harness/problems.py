@@ -9,11 +9,14 @@ from pathlib import Path
 
 from .locations import bundled_dir
 from .yamlfiles import read_yaml
-from .valuetypes import Type, TypeSyntaxError, check_value, parse_type
+from .valuetypes import FloatRule, Type, TypeSyntaxError, check_value, parse_type
 
 DIFFICULTIES = ("easy", "medium", "hard")
 IDENTIFIER = re.compile(r"^[a-z][a-z0-9_]*$")
-DEFAULT_TOLERANCE = 1e-9
+# PEP 485's defaults (math.isclose): relative 1e-9, absolute 0, so a tiny expected value is
+# checked rather than swallowed by an absolute tolerance larger than itself.
+DEFAULT_REL_TOL = 1e-9
+DEFAULT_ABS_TOL = 0.0
 
 
 class ProblemError(ValueError):
@@ -43,7 +46,7 @@ class Problem:
     function: str
     params: tuple[Param, ...]
     returns: Type
-    tolerance: float
+    tolerance: FloatRule
     cases: tuple[Case, ...]
     reference: dict[str, str] = field(hash=False)
     source: Path = field(hash=False, compare=False)
@@ -168,9 +171,7 @@ def parse_problem(data: object, file: Path) -> Problem:
         raise fail("signature.params", "parameter names must be distinct")
     returns = _type(require("returns", str, signature, "signature."), fail, "signature.returns")
 
-    tolerance = data.get("tolerance", DEFAULT_TOLERANCE)
-    if isinstance(tolerance, bool) or not isinstance(tolerance, (int, float)) or not 0 <= tolerance < 1:
-        raise fail("tolerance", f"expected a number in [0, 1), got {tolerance!r}")
+    tolerance = _float_rule(data, fail)
 
     cases = []
     for i, raw in enumerate(require("cases", list)):
@@ -203,11 +204,34 @@ def parse_problem(data: object, file: Path) -> Problem:
         function=function,
         params=tuple(params),
         returns=returns,
-        tolerance=float(tolerance),
+        tolerance=tolerance,
         cases=tuple(cases),
         reference=dict(reference),
         source=file,
     )
+
+
+def _float_rule(data: dict, fail) -> FloatRule:
+    """``tolerance`` as ``{rel, abs}`` (PEP 485's two tolerances), or the legacy scalar, which
+    sets both to the same number; ``signed_zero: true`` makes the sign of an expected zero count."""
+    raw = data.get("tolerance", {})
+    signed_zero = data.get("signed_zero", False)
+    if not isinstance(signed_zero, bool):
+        raise fail("signed_zero", f"expected true or false, got {signed_zero!r}")
+
+    def number(value, where):
+        if isinstance(value, bool) or not isinstance(value, (int, float)) or not 0 <= value < 1:
+            raise fail(where, f"expected a number in [0, 1), got {value!r}")
+        return float(value)
+
+    if isinstance(raw, dict):
+        unknown = set(raw) - {"rel", "abs"}
+        if unknown:
+            raise fail("tolerance", f"unknown key(s) {', '.join(sorted(map(str, unknown)))}; expected rel and/or abs")
+        return FloatRule(rel=number(raw.get("rel", DEFAULT_REL_TOL), "tolerance.rel"),
+                         abs=number(raw.get("abs", DEFAULT_ABS_TOL), "tolerance.abs"), signed_zero=signed_zero)
+    value = number(raw, "tolerance")
+    return FloatRule(rel=value, abs=value, signed_zero=signed_zero)
 
 
 def _type(text: str, fail, where: str) -> Type:

@@ -21,6 +21,7 @@ import jinja2
 
 from .locations import runtime_search_path
 from .problems import Problem
+from .valuetypes import GENERICS, SCALARS
 from .sandbox.base import Limits, RuntimeSandboxNeeds
 from .yamlfiles import read_yaml
 
@@ -57,6 +58,9 @@ class Runtime:
     limits: dict
     error_patterns: dict[str, tuple[str, ...]]
     reference_indent: str = ""
+    reserved_words: frozenset[str] = frozenset()
+    reserved_rename: str = "{name}_"
+    unsupported_types: dict[str, str] = field(default_factory=dict)
 
     @cached_property
     def templates(self) -> jinja2.Environment:
@@ -76,6 +80,9 @@ class Runtime:
             camel=lambda s: recase(s, "camel"),
             pascal=lambda s: recase(s, "pascal"),
             indent_lines=indent_lines,
+            float_class=float_class,
+            chunked=chunked,
+            utf16_units=utf16_units,
         )
         env.globals["INT64_MIN"] = -(2**63)
         return env
@@ -89,7 +96,27 @@ class Runtime:
         return hasher.hexdigest()
 
     def name_of(self, kind: str, snake_name: str) -> str:
-        return recase(snake_name, self.naming.get(kind, "snake"))
+        """A problem's snake_case name in this language's convention; a name that is a reserved
+        word here gets the runtime's ``reserved_rename`` pattern (``end`` -> ``end_``)."""
+        name = recase(snake_name, self.naming.get(kind, "snake"))
+        return self.reserved_rename.format(name=name) if name in self.reserved_words else name
+
+    def renamed(self, problem: Problem) -> list[tuple[str, str]]:
+        """The (problem name, name in this language) pairs that reserved words forced apart."""
+        names = [("function", problem.function)] + [("param", p.name) for p in problem.params]
+        return [(snake, self.name_of(kind, snake)) for kind, snake in names
+                if recase(snake, self.naming.get(kind, "snake")) in self.reserved_words]
+
+    def refusal(self, problem: Problem) -> str | None:
+        """Why this runtime cannot pose ``problem`` (a declared type it has no counterpart
+        for), or None when it can."""
+        declared = [(f"parameter {p.name}", p.type) for p in problem.params] + [("the result", problem.returns)]
+        for where, typ in declared:
+            for part in typ.walk():
+                if part.kind in self.unsupported_types:
+                    return (f"{self.name} cannot represent {part.kind} (declared by {where} of {problem.id}):"
+                            f" {self.unsupported_types[part.kind]}")
+        return None
 
     def context(self, problem: Problem) -> dict:
         return {
@@ -149,6 +176,34 @@ def float_literal(value: float) -> str:
     if not math.isfinite(value):
         raise ValueError("non-finite floats have no literal")
     return text if any(c in text for c in ".e") else text + ".0"
+
+
+def float_class(value: float) -> str:
+    """``nan``, ``inf``, ``-inf``, ``-0`` or ``finite``: templates spell the first four in
+    each language's own way (no language shares one literal for them)."""
+    value = float(value)
+    if math.isnan(value):
+        return "nan"
+    if math.isinf(value):
+        return "inf" if value > 0 else "-inf"
+    if value == 0 and math.copysign(1.0, value) < 0:
+        return "-0"
+    return "finite"
+
+
+def chunked(text: str, size: int) -> list[str]:
+    """``text`` in pieces of at most ``size`` code points, never splitting one: templates
+    concatenate them where a compiler limits the length of one literal (javac's 65,535-byte
+    constants, for one)."""
+    if size < 1:
+        raise ValueError("chunk size must be positive")
+    return [text[i:i + size] for i in range(0, len(text), size)] or [""]
+
+
+def utf16_units(text: str) -> list[int]:
+    """The UTF-16 code units of ``text`` (surrogate pairs for code points above U+FFFF)."""
+    data = text.encode("utf-16-le", "surrogatepass")
+    return [int.from_bytes(data[i:i + 2], "little") for i in range(0, len(data), 2)]
 
 
 def recase(snake_name: str, style: str) -> str:
@@ -249,6 +304,23 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
     if not isinstance(patterns, dict) or not all(_str_list(v, allow_empty=True) for v in patterns.values()):
         raise fail("error_patterns", "expected a mapping of outcome to a list of strings")
     version = data.get("version_command", [])
+    reserved = data.get("reserved_words", [])
+    if not _str_list(reserved, allow_empty=True):
+        raise fail("reserved_words", "expected a list of strings")
+    rename = data.get("reserved_rename", "{name}_")
+    if not isinstance(rename, str) or "{name}" not in rename or rename == "{name}":
+        raise fail("reserved_rename", "expected a pattern containing {name}, such as '{name}_'")
+    try:
+        rename.format(name="x")
+    except (KeyError, IndexError, ValueError) as exc:
+        raise fail("reserved_rename", f"not a valid pattern: {exc}") from None
+    unsupported = data.get("unsupported_types", {}) or {}
+    if not isinstance(unsupported, dict) or not all(isinstance(k, str) and isinstance(v, str)
+                                                    for k, v in unsupported.items()):
+        raise fail("unsupported_types", "expected a mapping of type name to the reason it is refused")
+    unknown = set(unsupported) - set(SCALARS) - set(GENERICS)
+    if unknown:
+        raise fail("unsupported_types", f"unknown type name(s) {', '.join(sorted(unknown))}")
     return Runtime(
         name=path.name,
         path=path,
@@ -269,6 +341,9 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
         limits=dict(limits),
         error_patterns={k: tuple(v) for k, v in patterns.items()},
         reference_indent=str(data.get("reference_indent", "")),
+        reserved_words=frozenset(reserved),
+        reserved_rename=rename,
+        unsupported_types=dict(unsupported),
     )
 
 

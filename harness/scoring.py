@@ -159,8 +159,11 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
                 """One item per input row: a job to run, or None for a row settled on the spot
                 (rejected, resumed, or sharing a verdict). Yielding the None too makes every row
                 count against the scheduler's look-ahead, which bounds memory."""
+                def refusal(problem_id: str, language: str) -> str | None:
+                    return runtimes[language].refusal(problems.problems[problem_id])
+
                 for item in read_dumps(options.dumps, set(problems.problems), set(runtimes),
-                                       options.max_completion_bytes):
+                                       options.max_completion_bytes, refusal):
                     if isinstance(item, Reject):
                         store.reject(item)
                         counts["rejected"] += 1
