@@ -6,12 +6,11 @@ from __future__ import annotations
 import contextlib
 import logging
 import os
-import stat
 import tempfile
 from pathlib import Path
 
 from .base import RuntimeSandboxNeeds
-from .step_supervisor import remove_tree
+from .step_supervisor import read_regular_file, remove_tree, write_new_file
 
 LOG = logging.getLogger("assay.sandbox")
 
@@ -44,24 +43,14 @@ class LocalWorkspace:
         self.owner = owner
 
     def write(self, name: str, content: str) -> None:
-        target = self.path / name
-        target.parent.mkdir(parents=True, exist_ok=True)
-        target.write_text(content, encoding="utf-8")
-        if self.owner is not None:
-            os.chown(target, self.owner, self.owner)
+        # The harness may run as root and the folder is the candidate's: a link planted there
+        # (by a process that outlived an earlier candidate in a warm sandbox) must never be
+        # followed, and only the file just made is given to the sandbox user, by descriptor.
+        write_new_file(str(self.path), name, content.encode("utf-8"), owner=self.owner)
 
     def read(self, name: str, max_bytes: int) -> bytes | None:
-        target = self.path / name
-        try:
-            # O_NOFOLLOW: a candidate could replace the file with a link to a host file;
-            # O_NONBLOCK: or with a FIFO nobody writes to, which would block the read forever.
-            fd = os.open(target, os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK)
-        except OSError:
-            return None
-        with os.fdopen(fd, "rb") as handle:
-            if not stat.S_ISREG(os.fstat(fd).st_mode):
-                return None
-            return handle.read(max_bytes)
+        # No link followed, on the way or at the end; a FIFO in its place reads as missing.
+        return read_regular_file(str(self.path), name, max_bytes)
 
     def remove(self) -> str | None:
         """Remove the folder; what went wrong, if anything, as a message (logged too)."""

@@ -82,30 +82,13 @@ class Supervisor:
         self.oom_files = oom_counter_files()
 
     # --- files -----------------------------------------------------------------------------
-    def path(self, name):
-        if not name or name.startswith("/") or ".." in name.split("/"):
-            raise ValueError("file name must be relative to the work dir: %r" % name)
-        return os.path.join(WORK, name)
-
     def op_write(self, req):
-        target = self.path(req["name"])
-        os.makedirs(os.path.dirname(target), exist_ok=True)
-        fd = os.open(target, os.O_WRONLY | os.O_CREAT | os.O_TRUNC | os.O_NOFOLLOW, 0o644)
-        with os.fdopen(fd, "wb") as handle:
-            handle.write(base64.b64decode(req["data"]))
+        write_new_file(WORK, req["name"], base64.b64decode(req["data"]))
         return {}
 
     def op_read(self, req):
-        try:
-            # O_NOFOLLOW: a link planted by the candidate; O_NONBLOCK: a FIFO must not hang us.
-            fd = os.open(self.path(req["name"]), os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK)
-        except OSError:
-            return {"data": None}
-        with os.fdopen(fd, "rb") as handle:
-            if not stat.S_ISREG(os.fstat(fd).st_mode):
-                return {"data": None}
-            data = handle.read(int(req["max_bytes"]))
-        return {"data": base64.b64encode(data).decode("ascii")}
+        data = read_regular_file(WORK, req["name"], int(req["max_bytes"]))
+        return {"data": None if data is None else base64.b64encode(data).decode("ascii")}
 
     # --- steps -----------------------------------------------------------------------------
     def op_run(self, req):
@@ -334,6 +317,72 @@ def ipc_objects():
 
 
 DIR_FLAGS = os.O_RDONLY | os.O_DIRECTORY | os.O_NOFOLLOW | os.O_CLOEXEC
+
+
+def open_folder_of(root, name, create=False, owner=None):
+    """A descriptor for the folder that holds ``name`` (a path relative to the folder
+    ``root``) and the file's own name there. Every step is taken with O_NOFOLLOW, so a link a
+    candidate planted (in place of the file or of any folder on the way) is never followed.
+    With ``create``, missing folders are made (and given to ``owner``)."""
+    parts = name.split("/")
+    if not name or name.startswith("/") or any(part in ("", ".", "..") for part in parts):
+        raise ValueError("file name must be relative to the work dir: %r" % name)
+    fd = os.open(root, DIR_FLAGS)
+    try:
+        for part in parts[:-1]:
+            made = False
+            if create:
+                try:
+                    os.mkdir(part, 0o755, dir_fd=fd)
+                    made = True
+                except FileExistsError:
+                    pass
+            inner = os.open(part, DIR_FLAGS, dir_fd=fd)
+            os.close(fd)
+            fd = inner
+            if made and owner is not None:
+                os.fchown(fd, owner, owner)
+    except BaseException:
+        os.close(fd)
+        raise
+    return fd, parts[-1]
+
+
+def write_new_file(root, name, data, owner=None):
+    """Create ``name`` under ``root`` with ``data``: a new file or an error, never a write
+    through a link or into a file that someone else put there first."""
+    folder, leaf = open_folder_of(root, name, create=True, owner=owner)
+    try:
+        fd = os.open(leaf, os.O_WRONLY | os.O_CREAT | os.O_EXCL | os.O_NOFOLLOW | os.O_CLOEXEC, 0o644,
+                     dir_fd=folder)
+    except FileExistsError:
+        raise FileExistsError("%s: something is already there in a work dir that should be empty (left "
+                              "by an earlier candidate?); not written" % name) from None
+    finally:
+        os.close(folder)
+    with os.fdopen(fd, "wb") as handle:
+        if owner is not None:
+            os.fchown(fd, owner, owner)  # the file just made, by its descriptor
+        handle.write(data)
+
+
+def read_regular_file(root, name, max_bytes):
+    """The first ``max_bytes`` of ``name`` under ``root``, or None if it is missing, not a
+    regular file, or reached through a link. O_NONBLOCK: a FIFO in its place must not hang."""
+    try:
+        folder, leaf = open_folder_of(root, name)
+    except OSError:
+        return None
+    try:
+        fd = os.open(leaf, os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK | os.O_CLOEXEC, dir_fd=folder)
+    except OSError:
+        return None
+    finally:
+        os.close(folder)
+    with os.fdopen(fd, "rb") as handle:
+        if not stat.S_ISREG(os.fstat(fd).st_mode):
+            return None
+        return handle.read(max_bytes)
 
 
 def remove_tree(path):
