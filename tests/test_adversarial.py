@@ -69,6 +69,8 @@ KNOWN_ESCAPES: dict[tuple[str, str], dict[str, str]] = {
         {"bubblewrap": KEYRING_ESCAPE},
     ("perl", "adds a key named after the tag to its user keyring (add_key through syscall())"):
         {"bubblewrap": KEYRING_ESCAPE},
+    ("php", "adds a key named after the tag to its user keyring, through a child php that loads FFI itself"):
+        {"bubblewrap": KEYRING_ESCAPE},
 }
 
 
