@@ -3,30 +3,43 @@
 pass@k is the unbiased estimator of Chen et al. (2021), "Evaluating Large Language Models
 Trained on Code": for a problem with n samples of which c pass,
     pass@k = 1 - C(n - c, k) / C(n, k),
-computed in the numerically stable product form 1 - prod_{i=n-c+1}^{n} (1 - k / i).
+computed exactly in rational arithmetic (``math.comb``, ``fractions``) and rounded once, so
+that two correct tools print the same double.
 """
 
 from __future__ import annotations
 
 import json
+import math
 from collections import defaultdict
+from fractions import Fraction
 from pathlib import Path
 from typing import Iterable
 
-import numpy as np
 
 from .execution import OUTCOMES
 
 
-def pass_at_k(n: int, c: int, k: int) -> float:
-    """Probability that at least one of k samples drawn without replacement from n passes."""
+def pass_at_k_exact(n: int, c: int, k: int) -> Fraction:
+    """pass@k as an exact rational, 1 - C(n - c, k) / C(n, k) with ``math.comb``."""
     if not 0 <= c <= n:
         raise ValueError(f"need 0 <= c <= n, got n={n}, c={c}")
     if k < 1 or k > n:
         raise ValueError(f"k={k} is outside 1..n (n={n}): pass@{k} is not available")
     if n - c < k:
-        return 1.0
-    return float(1.0 - np.prod(1.0 - k / np.arange(n - c + 1, n + 1)))
+        return Fraction(1)
+    return 1 - Fraction(math.comb(n - c, k), math.comb(n, k))
+
+
+def pass_at_k(n: int, c: int, k: int) -> float:
+    """Probability that at least one of k samples drawn without replacement from n passes:
+    the exact value rounded once to the nearest double."""
+    return float(pass_at_k_exact(n, c, k))
+
+
+def exact_mean(values: list[Fraction]) -> float:
+    """The mean in exact rationals, rounded once: the same figure in any order of rows."""
+    return float(sum(values, Fraction(0)) / len(values))
 
 
 def parse_ks(text: str) -> list[int]:
@@ -65,15 +78,17 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
         counts[0] += 1
         counts[1] += row["outcome"] == "passed"
 
-    per_pair: dict[tuple[str, str], dict[str, float | None]] = {}
+    exact: dict[tuple[str, str], dict[str, Fraction | None]] = {}
     for (problem, language), (n, c) in samples.items():
-        per_pair[(problem, language)] = {str(k): (pass_at_k(n, c, k) if k <= n else None) for k in ks}
+        exact[(problem, language)] = {str(k): (pass_at_k_exact(n, c, k) if k <= n else None) for k in ks}
+    per_pair = {pair: {k: (None if v is None else float(v)) for k, v in values.items()}
+                for pair, values in exact.items()}
 
     def mean_over(pairs: list[tuple[str, str]]) -> dict[str, float | None]:
         result: dict[str, float | None] = {}
         for k in ks:
-            values = [per_pair[p][str(k)] for p in sorted(pairs)]  # sorted: same mean in any row order
-            result[str(k)] = None if not values or any(v is None for v in values) else float(np.mean(values))
+            values = [exact[p][str(k)] for p in pairs]
+            result[str(k)] = None if not values or any(v is None for v in values) else exact_mean(values)
         return result
 
     languages = sorted({language for _, language in samples} | set(outcomes))

@@ -10,11 +10,12 @@ from __future__ import annotations
 
 import json
 from collections import Counter, defaultdict
+from fractions import Fraction
 from dataclasses import dataclass, field
 from pathlib import Path
 
 from .execution import OUTCOMES
-from .metrics import pass_at_k
+from .metrics import pass_at_k_exact
 from .problems import ProblemError, load_problem_set
 from .report import SHORT, pass_table
 from .stats import DEFAULT_CONFIDENCE, DEFAULT_RESAMPLES, DEFAULT_SEED, bootstrap_ratio
@@ -186,13 +187,13 @@ def groups(run_problems: dict[str, dict], pairs, tags: bool = True) -> list[Grou
 
 def pair_values(counts: dict[tuple[str, str], tuple[int, int]], k: int) -> dict[tuple[str, str], float | None]:
     """pass@k per pair (Chen et al. 2021 estimator from ``metrics``); None where k > samples."""
-    return {pair: (pass_at_k(n, c, k) if k <= n else None) for pair, (n, c) in counts.items()}
+    return {pair: (pass_at_k_exact(n, c, k) if k <= n else None) for pair, (n, c) in counts.items()}
 
 
 def by_problem(pairs, values: dict) -> tuple[list[str], list[float], list[int]] | None:
     """Problems, each one's summed pass@k over its languages, and its number of pairs;
     None if any pair has no value (k above its samples)."""
-    sums: dict[str, float] = defaultdict(float)
+    sums: dict[str, Fraction] = defaultdict(Fraction)
     weights: dict[str, int] = defaultdict(int)
     for pair in pairs:
         value = values[pair]

@@ -82,6 +82,16 @@ def _check(confidence: float, resamples: int, method: str) -> None:
         raise ValueError(f"method must be one of {', '.join(METHODS)}, got {method!r}")
 
 
+def _exact_ratio(numerator, weight) -> float:
+    """sum(numerator) / sum(weight) in exact rationals, rounded once to the nearest double, so
+    that a point estimate never depends on summation order or accumulated rounding. Empty
+    input is left to ``_arrays`` to refuse."""
+    total = sum((Fraction(w) for w in weight), Fraction(0))
+    if not total:
+        return float("nan")
+    return float(sum((Fraction(x) for x in numerator), Fraction(0)) / total)
+
+
 def _arrays(*columns) -> list[np.ndarray]:
     arrays = [np.asarray(c, dtype=float) for c in columns]
     size = arrays[0].shape
@@ -157,9 +167,9 @@ def bootstrap_ratio(numerator, weight=None, *, confidence: float = DEFAULT_CONFI
     """
     _check(confidence, resamples, method)
     if weight is None:
-        weight = np.ones(len(numerator))
+        weight = [1] * len(numerator)
+    estimate = _exact_ratio(numerator, weight)
     numerator, weight = _arrays(numerator, weight)
-    estimate = float(_ratio(numerator, weight))
     replicates = _replicates([numerator, weight], _ratio, resamples, seed)
     if np.ptp(replicates) == 0 or len(numerator) < 2:
         return Interval(estimate, estimate, estimate, method, confidence, resamples, len(numerator), True)
@@ -179,15 +189,15 @@ def paired_bootstrap(numerator_a, numerator_b, weight=None, *, confidence: float
     """
     _check(confidence, resamples, method)
     if weight is None:
-        weight = np.ones(len(numerator_a))
+        weight = [1] * len(numerator_a)
+    a_value = _exact_ratio(numerator_a, weight)
+    b_value = _exact_ratio(numerator_b, weight)
+    estimate = _exact_ratio([Fraction(b) - Fraction(a) for a, b in zip(numerator_a, numerator_b)], weight)
     numerator_a, numerator_b, weight = _arrays(numerator_a, numerator_b, weight)
 
     def difference(a, b, w):
         return (b.sum(axis=-1) - a.sum(axis=-1)) / w.sum(axis=-1)
 
-    a_value = float(_ratio(numerator_a, weight))
-    b_value = float(_ratio(numerator_b, weight))
-    estimate = float(difference(numerator_a, numerator_b, weight))
     replicates = _replicates([numerator_a, numerator_b, weight], difference, resamples, seed)
     units = len(weight)
     p_value = bootstrap_p_value(replicates) if units >= 2 else None

@@ -91,3 +91,31 @@ def test_k_list_parsing(text, expected):
 def test_k_list_parsing_rejects_nonsense(text):
     with pytest.raises(ValueError):
         parse_ks(text)
+
+
+@given(st.integers(1, 300).flatmap(lambda n: st.tuples(st.just(n), st.integers(0, n), st.integers(1, n))))
+def test_pass_at_k_is_the_nearest_double_to_the_exact_value(nck):
+    # Source: fractions.Fraction -> float conversion is correctly rounded (Python docs), so two
+    # correct tools agree to the last bit, not merely within 1e-12.
+    n, c, k = nck
+    assert pass_at_k(n, c, k) == float(exact_pass_at_k(n, c, k))
+
+
+def test_three_eighths_is_printed_as_three_eighths():
+    # 1 - C(5, 2) / C(8, 2) = 1 - 10/28 = 9/14; 1 - C(5, 1)/C(8, 1) = 3/8 = 0.375 exactly.
+    assert pass_at_k(8, 3, 1) == 0.375
+    rows = [{"problem": "p", "language": "x", "outcome": "passed" if i < 3 else "wrong_answer"} for i in range(8)]
+    assert summarize(rows, [1])["pass_at_k"]["overall"]["1"] == 0.375
+
+
+@given(st.lists(st.tuples(st.integers(1, 12), st.integers(0, 12)), min_size=1, max_size=25), st.randoms())
+def test_summary_means_are_exact_and_independent_of_row_order(pairs, rng):
+    rows = []
+    for index, (n, c) in enumerate(pairs):
+        c = min(c, n)
+        rows += [{"problem": f"p{index}", "language": "x", "outcome": "passed" if i < c else "wrong_answer"}
+                 for i in range(n)]
+    expected = float(sum(exact_pass_at_k(min(n, 12), min(c, n), 1) for n, c in pairs) / len(pairs))
+    assert summarize(rows, [1])["pass_at_k"]["overall"]["1"] == expected
+    rng.shuffle(rows)
+    assert summarize(rows, [1])["pass_at_k"]["overall"]["1"] == expected

@@ -199,3 +199,17 @@ def test_mcnemar_exact_small_cases_by_hand():
     assert mcnemar_exact(1, 6) == float(2 * Fraction(1 + math.comb(7, 1), 2 ** 7))
     assert mcnemar_exact(4, 4) == 1.0
     assert mcnemar_exact(0, 0) == 1.0
+
+
+def test_point_estimates_are_exact_means_rounded_once():
+    # Source: fractions.Fraction gives the exact sum of the doubles; float(Fraction) rounds once.
+    from fractions import Fraction
+
+    values = [0.1, 0.2, 0.3, 0.7, 0.9]
+    exact = float(sum(map(Fraction, values)) / len(values))
+    assert bootstrap_ratio(values, resamples=200).estimate == exact
+    assert bootstrap_ratio(list(reversed(values)), resamples=200).estimate == exact
+    third = [Fraction(1, 3)] * 3
+    assert bootstrap_ratio(third, resamples=200).estimate == float(Fraction(1, 3))
+    diff = paired_bootstrap(values, list(reversed(values)), resamples=200)
+    assert diff.estimate == float((sum(map(Fraction, reversed(values))) - sum(map(Fraction, values))) / 5)
