@@ -217,14 +217,24 @@ def demo(
     out: Path = typer.Option(Path("results/demo"), "--out", help="Folder for the demo's dumps and results."),
     jobs: int = typer.Option(2, "--jobs", "-j", min=1),
     sandbox: str = typer.Option("bubblewrap", "--sandbox", help=f"Sandbox backend: {', '.join(BACKENDS)}."),
+    lang: Optional[List[str]] = typer.Option(None, "--lang", help="Languages to score, repeatable (default: "
+                                              "python, javascript, cpp, java; any installed runtime works)."),
     as_json: bool = typer.Option(False, "--json", help="Print both summaries as JSON."),
 ) -> None:
     """Synthesize two checkpoints' dumps for a fictional lab, score both, print both tables."""
-    from .demo import run_demo
+    from .demo import demo_runtimes, run_demo
 
+    unknown = [name for name in lang or [] if name not in available_runtimes()]
+    if unknown:
+        fail(f"unknown runtime(s) {', '.join(unknown)}; known: {', '.join(available_runtimes())}")
+    runtimes, skipped = demo_runtimes(lang)
+    for note in skipped:
+        typer.echo(f"skipped {note}", err=True)
+    if not runtimes:
+        fail("no language to score: install a toolchain (bash .ci/install installs all of them)")
     box = _make_sandbox(sandbox)
     try:
-        results = run_demo(out, box, jobs=jobs, progress=not as_json)
+        results = run_demo(out, box, jobs=jobs, progress=not as_json, languages=list(runtimes))
     finally:
         box.close()
     if as_json:

@@ -75,15 +75,30 @@ def write_dump(path: Path, label: str, chance: float, problem_set: ProblemSet, r
     return rows
 
 
+# Four languages keep the default demo under two minutes on 2 cores; --lang picks any others.
+DEFAULT_LANGUAGES = ("python", "javascript", "cpp", "java")
+
+
+def demo_runtimes(languages: list[str] | None) -> tuple[dict[str, Runtime], list[str]]:
+    """The runtimes to score (named ones, or the default four) whose toolchain is installed,
+    and a note for each one left out."""
+    names = languages or [n for n in DEFAULT_LANGUAGES if n in available_runtimes()]
+    runtimes, skipped = {}, []
+    for name in names:
+        runtime = load_runtime(name)
+        if runtime.toolchain_version() is None:
+            skipped.append(f"{name}: toolchain not installed ({' '.join(runtime.version_command)} not found)")
+        elif not demo_templates(runtime):
+            skipped.append(f"{name}: the runtime has no demo/ fault templates")
+        else:
+            runtimes[name] = runtime
+    return runtimes, skipped
+
+
 def run_demo(out: Path, sandbox: Sandbox, jobs: int = 2, progress: bool = True,
              set_name: str = "core", languages: list[str] | None = None) -> dict[str, ScoreOutcome]:
     problem_set = load_problem_set(set_name)
-    names = languages or [n for n in available_runtimes() if (Path(load_runtime(n).path) / "demo").is_dir()]
-    runtimes = {}
-    for name in names:
-        runtime = load_runtime(name)
-        if runtime.toolchain_version() is not None:
-            runtimes[name] = runtime
+    runtimes, _ = demo_runtimes(languages)
     (out / "dumps").mkdir(parents=True, exist_ok=True)
     results = {}
     for label, chance in CHECKPOINTS.items():

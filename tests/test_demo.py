@@ -33,3 +33,18 @@ def test_assay_demo_scores_both_checkpoints_and_prints_both_tables(tmp_path):
     assert late["pass_at_k"]["overall"]["1"] > early["pass_at_k"]["overall"]["1"]
     outcomes = {o for s in summaries.values() for lang in s["outcomes"].values() for o, n in lang.items() if n}
     assert {"passed", "wrong_answer", "compile_error", "runtime_error", "timeout", "memory_limit"} <= outcomes
+
+
+def test_assay_demo_scores_any_installed_language_it_is_asked_for(tmp_path):
+    done = subprocess.run([sys.executable, "-m", "harness", "demo", "--out", str(tmp_path / "demo"), "--json",
+                           "--lang", "lua"], capture_output=True, text=True, timeout=600)
+    assert done.returncode == 0, done.stderr
+    summaries = json.loads(done.stdout)
+    assert all(set(s["pass_at_k"]["by_language"]) == {"lua"} for s in summaries.values())
+    assert all(s["samples"] > 0 for s in summaries.values())
+
+
+def test_assay_demo_refuses_an_unknown_language_by_name(tmp_path):
+    done = subprocess.run([sys.executable, "-m", "harness", "demo", "--out", str(tmp_path / "demo"),
+                           "--lang", "cobol"], capture_output=True, text=True, timeout=60)
+    assert done.returncode == 2 and "cobol" in done.stderr and "Traceback" not in done.stderr
