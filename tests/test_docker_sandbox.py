@@ -20,7 +20,7 @@ from pathlib import Path
 
 import pytest
 
-from harness.checks import check_runtime
+from harness.checks import check_runtime, load_wrong_candidates
 from harness.completions import Sample
 from harness.execution import Executor
 from harness.runtimes import load_runtime
@@ -95,7 +95,9 @@ def test_conformance_references_and_wrong_candidates_get_the_same_verdicts_as_bu
     under_bubblewrap = check_runtime(runtime, conformance, sandbox, 2, overrides)
     docker_outcomes = {row["check"]: row["outcome"] for row in under_docker}
     assert docker_outcomes == {row["check"]: row["outcome"] for row in under_bubblewrap}
-    assert len(docker_outcomes) == len(conformance) + 10  # references + runtimes/python/checks.yaml
+    # references + runtimes/python/checks.yaml (the forged out-of-memory error among them: the
+    # per-step peak memory, not the message, decides it on both backends)
+    assert len(docker_outcomes) == len(conformance) + len(load_wrong_candidates(runtime))
     assert all(row["ok"] for row in under_docker), [r for r in under_docker if not r["ok"]]
 
 

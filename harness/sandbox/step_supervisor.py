@@ -118,6 +118,7 @@ class Supervisor:
             "timed_out": timed_out,
             "flooded": flooded,
             "oom_kills": None if before is None or after is None else after - before,
+            "max_rss_kb": getattr(proc, "max_rss_kb", None),
             "left_running": left_running,
             "residue": residue[:20],
         }
@@ -209,7 +210,7 @@ def collect(proc, limits, started):
             if exit_fd is None and not ended and proc.poll() is not None:
                 ended = True
             if ended and proc.returncode is None:
-                proc.wait()  # reaped first, so the sweep cannot take its exit status
+                reap_step(proc)  # reaped first, so the sweep cannot take its exit status
                 left_running = sweep()
             if exit_fd is None and ended and not any(k.data != "exit" for k in selector.get_map().values()):
                 break
@@ -217,16 +218,36 @@ def collect(proc, limits, started):
         os.close(exit_fd)
     if timed_out or flooded:
         kill_group(proc.pid)
-    try:
-        proc.wait(timeout=max(1.0, deadline - time.monotonic()))
-    except subprocess.TimeoutExpired:
+    if not reap_step(proc, timeout=max(1.0, deadline - time.monotonic())):
         timed_out = True
         kill_group(proc.pid)
-        proc.wait()
+        reap_step(proc)
     kill_group(proc.pid)
     for stream in buffers:
         stream.close()
     return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded, left_running
+
+
+def reap_step(proc, timeout=None):
+    """Wait for the step's process with wait4(), keeping its resource usage: ru_maxrss is the
+    peak resident memory of the step and the descendants it waited for, per step, on any host
+    (no cgroup needed). False when ``timeout`` passed first."""
+    if proc.returncode is not None:
+        return True
+    deadline = None if timeout is None else time.monotonic() + timeout
+    while True:
+        try:
+            pid, status, usage = os.wait4(proc.pid, 0 if deadline is None else os.WNOHANG)
+        except ChildProcessError:  # reaped elsewhere: Popen's own reading of that case
+            proc.wait()
+            return True
+        if pid == proc.pid:
+            proc.returncode = os.waitstatus_to_exitcode(status)
+            proc.max_rss_kb = usage.ru_maxrss
+            return True
+        if time.monotonic() >= deadline:
+            return False
+        time.sleep(0.01)
 
 
 def keep_tail(buffer, chunk):

@@ -297,6 +297,8 @@ def read_run_reply(reply: dict, limits: Limits) -> tuple[StepResult, str | None]
         result.timed_out = True
     if code == -signal.SIGXFSZ:
         result.file_size_exceeded = True
+    if reply.get("max_rss_kb") is not None:  # the backend may replace it with its cgroup's peak
+        result.extra["peak_memory_mb"] = round(reply["max_rss_kb"] / 1024, 1)
     oom_kills = reply["oom_kills"]
     if oom_kills is None:  # no readable OOM counter: a SIGKILL nobody else sent
         result.memory_exceeded = code == -signal.SIGKILL and not (result.timed_out or result.output_exceeded)
