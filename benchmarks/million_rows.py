@@ -120,7 +120,8 @@ def run_measured(argv: list[str], env: dict | None = None) -> Measured:
 
 SUMMARIZE = """
 import json, sys, time
-from harness.metrics import read_rows, summarize
+from harness.store import read_rows
+from harness.metrics import summarize
 started, cpu = time.monotonic(), time.process_time()
 summary = summarize(read_rows(sys.argv[1]), [1, 10, 100])
 print(json.dumps({"seconds": time.monotonic() - started, "cpu": time.process_time() - cpu,

@@ -18,8 +18,8 @@ from pathlib import Path
 import pytest
 import yaml
 
-from harness.completions import Sample
-from harness.execution import Executor
+from harness.vocabulary import Sample
+from harness.engine.execution import Executor
 from harness.problems import load_problem_set
 from harness.runtimes import indent_lines, load_runtime
 from harness.sandbox import make_sandbox

@@ -14,8 +14,7 @@ import pytest
 from hypothesis import HealthCheck, given, settings
 from hypothesis import strategies as st
 
-from harness.valuetypes import (FloatRule, JsonObject, LongInteger, check_value, float_equal, loads_reported,
-                                parse_type, show, values_equal)
+from harness.problems.types import FloatRule, JsonObject, LongInteger, check_value, float_equal, loads_reported, parse_type, show, values_equal
 
 finite = st.floats(allow_nan=False, allow_infinity=False)
 tolerances = st.sampled_from([0.0, 1e-15, 1e-12, 1e-9, 1e-6, 1e-3, 0.5])

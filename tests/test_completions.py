@@ -5,7 +5,8 @@ import json
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
-from harness.completions import Reject, Sample, assemble_code, read_dumps, strip_fence, truncate_at_stops
+from harness.vocabulary import Reject, Sample
+from harness.engine.completions import assemble_code, read_dumps, strip_fence, truncate_at_stops
 
 PROBLEMS = {"add_pair"}
 LANGUAGES = {"python"}
@@ -95,7 +96,7 @@ def test_modes_assemble_prompt_or_preamble():
 
 
 def test_sample_key_set_behaves_like_a_set_of_tuples():
-    from harness.completions import SampleKeySet
+    from harness.store import SampleKeySet
 
     keys = SampleKeySet()
     reference = set()

@@ -10,7 +10,7 @@ import pytest
 
 from harness.problems import load_problem_set
 from harness.runtimes import load_runtime
-from harness.scoring import ScoreOptions, score
+from harness.engine.scoring import ScoreOptions, score
 from harness.store import ResultStore, StoreWriteError
 
 from .test_scoring import ASSAY, assay, mixed_rows, read_rows, verdict_set, write_dump

@@ -4,7 +4,7 @@ import json
 import subprocess
 import sys
 
-from harness.demo import CHECKPOINTS, write_dump
+from harness.engine.demo import CHECKPOINTS, write_dump
 from harness.problems import load_problem_set
 from harness.runtimes import load_runtime
 

@@ -20,11 +20,12 @@ from pathlib import Path
 
 import pytest
 
-from harness.checks import check_runtime, load_wrong_candidates
-from harness.completions import Sample
-from harness.execution import Executor
+from harness.engine.checks import check_runtime, load_wrong_candidates
+from harness.vocabulary import Sample
+from harness.engine.execution import Executor
 from harness.runtimes import load_runtime
-from harness.sandbox import Limits, SandboxUnavailable, make_sandbox
+from harness.vocabulary import Limits
+from harness.sandbox import SandboxUnavailable, make_sandbox
 from harness.sandbox import docker as backend
 from harness.sandbox import images
 
@@ -54,13 +55,13 @@ def python_image(client):
     """The Python runtime's image, built (on the offline base where debootstrap can make it)
     when this checkout's runtime files have none yet."""
     runtime = load_runtime("python")
-    tag = images.image_tag(runtime)
+    tag = images.image_tag(runtime.needs)
     if images.find_image(client, tag) is None:
         offline = images.find_image(client, images.OFFLINE_BASE) is not None or (
             os.geteuid() == 0 and shutil.which("debootstrap") is not None)
         try:
             base = images.ensure_base(client, None, offline, lambda message: None)
-            images.build_runtime_image(client, runtime, base, lambda message: None)
+            images.build_runtime_image(client, runtime.needs, base, lambda message: None)
         except images.ImageError as exc:
             pytest.skip(f"the python image {tag} cannot be built here: {exc}")
     return tag
@@ -148,7 +149,7 @@ def test_a_runtime_without_its_image_says_how_to_build_it(docker_box, tmp_path):
     copy = tmp_path / "runtimes" / "python"
     shutil.copytree(ROOT / "runtimes" / "python", copy)
     (copy / "Dockerfile").write_text((copy / "Dockerfile").read_text() + "# changed\n")
-    box = backend.DockerSandbox(runtimes_dirs=[copy.parent])
+    box = backend.DockerSandbox()
     box.check()
     try:
         with pytest.raises(SandboxUnavailable, match="assay runtimes build python"):
@@ -164,7 +165,7 @@ def test_a_runtime_kept_outside_the_project_is_built_and_scored_with_runtimes_di
     shutil.copytree(ROOT / "runtimes" / "python", outside / "snake")
     yaml_file = outside / "snake" / "runtime.yaml"
     yaml_file.write_text(yaml_file.read_text().replace("name: python", "name: snake", 1))
-    tag = images.image_tag(load_runtime("snake", [outside]))
+    tag = images.image_tag(load_runtime("snake", [outside]).needs)
     built = subprocess.run(ASSAY + ["runtimes", "build", "snake", "--runtimes-dir", str(outside), "--offline-base"],
                            capture_output=True, text=True, cwd=ROOT, timeout=900)
     try:

@@ -42,7 +42,7 @@ def python_copy(tmp_path):
 
 def test_image_tag_is_the_runtime_name_and_the_first_12_hex_of_its_folder_hash(python_copy):
     runtime = load_runtime("python", [python_copy.parent])
-    tag = images.image_tag(runtime)
+    tag = images.image_tag(runtime.needs)
     repository, _, version = tag.partition(":")
     assert repository == "assay-python"
     assert version == folder_sha256(python_copy)[:12]
@@ -50,13 +50,13 @@ def test_image_tag_is_the_runtime_name_and_the_first_12_hex_of_its_folder_hash(p
 
 
 def test_editing_the_dockerfile_or_any_template_names_a_new_image(python_copy):
-    before = images.image_tag(load_runtime("python", [python_copy.parent]))
-    assert images.image_tag(load_runtime("python", [python_copy.parent])) == before
+    before = images.image_tag(load_runtime("python", [python_copy.parent]).needs)
+    assert images.image_tag(load_runtime("python", [python_copy.parent]).needs) == before
     dockerfile = python_copy / "Dockerfile"
     dockerfile.write_text(dockerfile.read_text() + "RUN true\n")
-    after_dockerfile = images.image_tag(load_runtime("python", [python_copy.parent]))
+    after_dockerfile = images.image_tag(load_runtime("python", [python_copy.parent]).needs)
     (python_copy / "program.j2").write_text((python_copy / "program.j2").read_text() + "\n")
-    after_template = images.image_tag(load_runtime("python", [python_copy.parent]))
+    after_template = images.image_tag(load_runtime("python", [python_copy.parent]).needs)
     assert len({before, after_dockerfile, after_template}) == 3
 
 

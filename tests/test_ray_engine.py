@@ -15,9 +15,9 @@ from pathlib import Path
 
 import pytest
 
-from harness.engines import ExecutorSpec
-from harness.engines_ray import Identity, NodeMismatch, RayEngineError, identity_of, mismatches, spec_for
-from harness.execution import Executor
+from harness.engine.engines import ExecutorSpec
+from harness.engine.ray import Identity, NodeMismatch, RayEngineError, identity_of, mismatches, spec_for
+from harness.engine.execution import Executor
 from harness.problems import load_problem_set
 from harness.runtimes import load_runtime
 
@@ -139,7 +139,7 @@ def test_a_ray_run_gives_the_local_verdicts_and_resumes_like_one(cluster, local_
 
 @needs_ray
 def test_the_engine_reads_jobs_lazily_and_keeps_twice_the_cpus_in_flight(connected, tiny_module_set, sandbox):
-    from harness.engines_ray import RayEngine
+    from harness.engine.ray import RayEngine
 
     executor = executor_for(tiny_module_set, sandbox)
     engine = RayEngine(spec_for(executor), identity_of(executor))
@@ -165,7 +165,7 @@ def test_the_engine_reads_jobs_lazily_and_keeps_twice_the_cpus_in_flight(connect
 @needs_ray
 def test_draining_after_an_interrupt_reads_no_more_jobs_and_reports_each_job_once(connected, tiny_module_set,
                                                                                  sandbox):
-    from harness.engines_ray import RayEngine
+    from harness.engine.ray import RayEngine
 
     executor = executor_for(tiny_module_set, sandbox)
     engine = RayEngine(spec_for(executor), identity_of(executor))
@@ -186,7 +186,7 @@ def test_draining_after_an_interrupt_reads_no_more_jobs_and_reports_each_job_onc
 
 
 def _samples(executor: Executor, count: int):
-    from harness.completions import Sample
+    from harness.vocabulary import Sample
 
     kinds = ["passed", "wrong", "partial", "crash"]
     for i in range(count):
@@ -195,7 +195,7 @@ def _samples(executor: Executor, count: int):
 
 @needs_ray
 def test_a_node_that_sees_other_problem_files_is_refused_with_the_difference(connected, tmp_path, sandbox):
-    from harness.engines_ray import RayEngine
+    from harness.engine.ray import RayEngine
 
     problems = write_set(tmp_path / "tiny", {"add_pair.yaml": ADD_PAIR})
     executor = executor_for(problems, sandbox)
@@ -283,7 +283,7 @@ def test_a_worker_lists_every_difference_from_the_driver(tiny_set, sandbox):
 
 
 def test_a_worker_that_cannot_build_the_executor_names_the_cause(tmp_path):
-    from harness.engines_ray import worker_executor
+    from harness.engine.ray import worker_executor
 
     spec = ExecutorSpec(problem_set=str(tmp_path / "gone"), runtimes=("python",), sandbox="none")
     with pytest.raises(NodeMismatch, match="cannot build the executor: no problem set"):

@@ -19,8 +19,11 @@ from typer.testing import CliRunner
 from harness.cli import app
 from harness.metrics import summarize
 from harness.problems import load_problem_set
-from harness.report import pass_table
-from harness.reporting import BAR_WIDTH, Settings, build_report, load_run, render, text_bar
+from harness.render.summary import pass_table
+from harness.render.cells import BAR_WIDTH, text_bar
+from harness.analysis.report import Settings, build_report
+from harness.store import load_run
+from harness.render.formats import render
 
 runner = CliRunner()
 FAST = ["--resamples", "1000"]
@@ -318,7 +321,7 @@ def test_html_report_loads_in_headless_chromium_without_console_messages(tmp_pat
 @pytest.mark.slow
 def test_real_demo_runs_report_and_compare(tmp_path):
     # Two real checkpoints scored in the sandbox (the demo on the small conformance set).
-    from harness.demo import run_demo
+    from harness.engine.demo import run_demo
     from harness.sandbox import SandboxUnavailable, make_sandbox
 
     try:

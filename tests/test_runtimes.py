@@ -8,7 +8,7 @@ import sys
 
 import pytest
 
-from harness.checks import CONFORMANCE_SET, check_runtime
+from harness.engine.checks import CONFORMANCE_SET, check_runtime
 from harness.problems import load_problem_set
 from harness.runtimes import RuntimeConfigError, available_runtimes, load_runtime
 
@@ -89,8 +89,8 @@ def test_runtimes_list_reports_toolchains():
 def test_prompts_for_every_language_are_exactly_what_scoring_continues(tmp_path):
     """`assay prompts` rows must be the text the executor prepends in continue mode, so the
     conformance references (which the checks above score in continue mode) pass from them."""
-    from harness.completions import Sample
-    from harness.execution import Executor
+    from harness.vocabulary import Sample
+    from harness.engine.execution import Executor
 
     prompts = tmp_path / "prompts.jsonl"
     args = [sys.executable, "-m", "harness", "prompts", "--set", CONFORMANCE_SET, "-o", str(prompts)]

@@ -13,7 +13,8 @@ import pytest
 from typer.testing import CliRunner
 
 from harness.cli import app
-from harness.sandbox import Limits, RuntimeSandboxNeeds, SandboxUnavailable, make_sandbox
+from harness.vocabulary import Limits, RuntimeSandboxNeeds
+from harness.sandbox import SandboxUnavailable, make_sandbox
 
 NEEDS = RuntimeSandboxNeeds("python")
 LIMITS = Limits(wall_seconds=30, cpu_seconds=30, memory_mb=512)

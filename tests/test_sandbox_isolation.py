@@ -7,7 +7,8 @@ import time
 
 import pytest
 
-from harness.sandbox import Limits, RuntimeSandboxNeeds, SandboxUnavailable, make_sandbox
+from harness.vocabulary import Limits, RuntimeSandboxNeeds
+from harness.sandbox import SandboxUnavailable, make_sandbox
 
 NEEDS = RuntimeSandboxNeeds("python")
 LIMITS = Limits(wall_seconds=10, cpu_seconds=10)

@@ -12,11 +12,12 @@ from pathlib import Path
 
 import pytest
 
-from harness.completions import Sample
-from harness.execution import Executor
+from harness.vocabulary import Sample
+from harness.engine.execution import Executor
 from harness.problems import load_problem_set
 from harness.runtimes import load_runtime
-from harness.sandbox import Limits, RuntimeSandboxNeeds, make_sandbox
+from harness.vocabulary import Limits, RuntimeSandboxNeeds
+from harness.sandbox import make_sandbox
 from tests.test_sandbox_cleanup import open_backend
 
 NEEDS = RuntimeSandboxNeeds("python")

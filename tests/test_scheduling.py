@@ -1,6 +1,6 @@
 """The scheduler interleaves languages within a bounded window and loses nothing."""
 
-from harness.scheduling import interleave
+from harness.engine.scheduling import interleave
 
 
 def test_grouped_input_is_interleaved_compiled_groups_first():

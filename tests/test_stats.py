@@ -19,7 +19,7 @@ import pytest
 import scipy.stats
 
 from harness.metrics import pass_at_k
-from harness.stats import bootstrap_p_value, bootstrap_ratio, mcnemar_exact, paired_bootstrap
+from harness.metrics.stats import bootstrap_p_value, bootstrap_ratio, mcnemar_exact, paired_bootstrap
 
 RESAMPLES = 20_000
 

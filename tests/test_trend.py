@@ -10,8 +10,10 @@ from typer.testing import CliRunner
 
 from harness.cli import app
 from harness.metrics import summarize
-from harness.reporting import Settings, load_run
-from harness.trend import build_trend, plot_trend, step_of
+from harness.analysis.report import Settings
+from harness.store import load_run
+from harness.analysis.trend import build_trend, step_of
+from harness.render.trend import plot_trend
 
 runner = CliRunner()
 FAST = ["--resamples", "500"]

@@ -137,8 +137,8 @@ def test_problem_check_warns_about_renamed_names_and_zero_expectations(tmp_path)
 
 def test_a_candidate_raising_an_out_of_memory_error_does_not_choose_its_label(tmp_path, sandbox, python_runtime,
                                                                              conformance):
-    from harness.completions import Sample
-    from harness.execution import Executor
+    from harness.vocabulary import Sample
+    from harness.engine.execution import Executor
 
     executor = Executor(sandbox, conformance, {"python": python_runtime})
     forged = executor.execute(Sample("pass_int", "python", 0, "    raise MemoryError('out of memory')\n", "t", 1))
@@ -150,8 +150,8 @@ def test_a_candidate_raising_an_out_of_memory_error_does_not_choose_its_label(tm
 
 
 def test_compile_errors_start_with_the_first_error(tmp_path, sandbox, conformance):
-    from harness.completions import Sample
-    from harness.execution import Executor
+    from harness.vocabulary import Sample
+    from harness.engine.execution import Executor
 
     cpp = load_runtime("cpp")
     if cpp.toolchain_version() is None:

@@ -2,7 +2,7 @@
 
 import pytest
 
-from harness.valuetypes import Type, TypeSyntaxError, check_value, parse_type, values_equal
+from harness.problems.types import Type, TypeSyntaxError, check_value, parse_type, values_equal
 
 
 @pytest.mark.parametrize("text", ["int", "list[int]", "dict[str, list[optional[float]]]", "tuple[str, bool]",

@@ -2,8 +2,8 @@
 
 import pytest
 
-from harness.completions import Sample
-from harness.execution import Executor, parse_results
+from harness.vocabulary import Sample
+from harness.engine.execution import Executor, parse_results
 from harness.problems import load_problem_set
 from harness.sandbox import make_sandbox
 
@@ -97,8 +97,8 @@ def test_results_without_this_runs_nonce_are_ignored():
 
 
 def test_a_fatal_limit_message_on_stderr_is_judged_as_that_limit(tiny_set, python_runtime):
-    from harness.execution import judge
-    from harness.sandbox import Limits, StepResult
+    from harness.engine.execution import judge
+    from harness.vocabulary import Limits, StepResult
 
     problem = load_problem_set(str(tiny_set)).problems["add_pair"]
     died = StepResult(exit_code=1, stderr="Traceback ...\nMemoryError\n")
@@ -110,7 +110,7 @@ def test_a_fatal_limit_message_on_stderr_is_judged_as_that_limit(tiny_set, pytho
 def test_a_malformed_checks_file_names_file_and_line(tmp_path, python_runtime):
     import shutil
 
-    from harness.checks import load_wrong_candidates
+    from harness.engine.checks import load_wrong_candidates
     from harness.runtimes import load_runtime
 
     shutil.copytree(python_runtime.path, tmp_path / "python")

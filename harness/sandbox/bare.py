@@ -8,7 +8,7 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from .base import Limits, RuntimeSandboxNeeds, StepResult
+from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
 from .local import LocalSandbox, LocalWorkspace, candidate_env, private_folder
 from .process import run_limited
 

@@ -31,7 +31,8 @@ from dataclasses import dataclass
 from pathlib import Path
 
 from . import cgroups
-from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
+from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
+from .base import SandboxUnavailable
 from .cgroups import Cgroup
 from .local import BASE_PATH, LOG, LocalSandbox, LocalWorkspace, candidate_env, private_folder, remove_folder
 from .process import join_and_drop, run_limited

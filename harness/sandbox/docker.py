@@ -38,7 +38,8 @@ import uuid
 from dataclasses import dataclass
 from pathlib import Path
 
-from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
+from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
+from .base import ClosingSandbox, SandboxUnavailable
 from .cgroups import Cgroup
 from .supervised import (
     AGENT_SOURCE,
@@ -285,15 +286,13 @@ class DockerWorkspace:
 
 # --- the backend -----------------------------------------------------------------------------
 
-class DockerSandbox:
+class DockerSandbox(ClosingSandbox):
     name = "docker"
 
-    def __init__(self, work_root: Path | None = None, *, max_runs: int | None = None,
-                 runtimes_dirs: list[Path] | None = None):
+    def __init__(self, work_root: Path | None = None, *, max_runs: int | None = None):
         # work_root is accepted for make_sandbox's sake: candidates' files live in containers.
         self.run_id = uuid.uuid4().hex
         self.max_runs = max_runs if max_runs is not None else max_runs_from_env(MAX_RUNS_ENV, DEFAULT_MAX_RUNS)
-        self.runtimes_dirs = runtimes_dirs
         self.client = None
         self.daemon: dict = {}
         self.images: dict[str, dict] = {}
@@ -315,7 +314,6 @@ class DockerSandbox:
             try:
                 info = client.info()
                 orphans = remove_containers(client, orphans_only=True)
-                self.images = self._survey_images(client)
             except Exception as exc:  # the daemon answered the ping, then failed
                 raise SandboxUnavailable(f"the Docker daemon failed while the sandbox started: {brief(exc)}") from None
             self.daemon = {
@@ -397,19 +395,9 @@ class DockerSandbox:
     def _make_pool(self, needs: RuntimeSandboxNeeds) -> WarmPool:
         from .images import find_image, image_tag
 
-        if needs.image:
-            tag = needs.image
-        else:
-            from ..runtimes import RuntimeConfigError, load_runtime, load_runtime_folder
-
-            try:
-                if needs.folder:
-                    runtime = load_runtime_folder(Path(needs.folder))
-                else:
-                    runtime = load_runtime(needs.name, self.runtimes_dirs)
-            except RuntimeConfigError as exc:
-                raise SandboxUnavailable(f"docker sandbox: {exc}") from None
-            tag = image_tag(runtime)
+        if not needs.image and not needs.digest:
+            raise SandboxUnavailable(f"docker sandbox: the {needs.name} runtime names no image and no folder to build one")
+        tag = image_tag(needs)
         image_id = self.retry(lambda: find_image(self.client, tag), "look up an image")
         if image_id is None:
             raise SandboxUnavailable(
@@ -418,23 +406,6 @@ class DockerSandbox:
             )
         self.images[needs.name] = {"tag": tag, "id": image_id}
         return WarmPool(self, lambda: self.start_box(image_id, needs.name))
-
-    def _survey_images(self, client) -> dict[str, dict]:
-        """Every known runtime's expected image and, when built, its id (for the manifest)."""
-        from ..runtimes import RuntimeConfigError, available_runtimes, load_runtime
-        from .images import dockerfile_path, find_image, image_tag
-
-        found = {}
-        for name in available_runtimes(self.runtimes_dirs):
-            try:
-                runtime = load_runtime(name, self.runtimes_dirs)
-            except RuntimeConfigError:
-                continue
-            if runtime.needs.image or not dockerfile_path(runtime).is_file():
-                continue
-            tag = image_tag(runtime)
-            found[name] = {"tag": tag, "id": find_image(client, tag)}
-        return found
 
     # -- containers --
     def start_box(self, image: str, runtime: str) -> Box:

@@ -22,7 +22,7 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Callable
 
-from ..runtimes import Runtime
+from ..vocabulary import RuntimeSandboxNeeds
 
 DEFAULT_BASE = "debian:bookworm-slim"
 OFFLINE_BASE = "assay-base:bookworm"
@@ -69,13 +69,16 @@ class BuiltImage:
     seconds: float
 
 
-def dockerfile_path(runtime: Runtime) -> Path:
-    return runtime.path / "Dockerfile"
+def dockerfile_path(needs: RuntimeSandboxNeeds) -> Path:
+    return Path(needs.folder) / "Dockerfile"
 
 
-def image_tag(runtime: Runtime) -> str:
-    """``assay-<runtime>:<first 12 hex of the runtime folder's content hash>``."""
-    return f"assay-{runtime.name}:{runtime.digest[:TAG_HEX]}"
+def image_tag(needs: RuntimeSandboxNeeds) -> str:
+    """``assay-<runtime>:<first 12 hex of the runtime folder's content hash>``, or the image the
+    runtime names itself."""
+    if needs.image:
+        return needs.image
+    return f"assay-{needs.name}:{needs.digest[:TAG_HEX]}"
 
 
 def dockerfile_problems(path: Path) -> list[str]:
@@ -261,8 +264,8 @@ def copy_local_certificates(root: Path, source: Path = LOCAL_CERTIFICATES) -> li
     return copied
 
 
-def build_runtime_image(client, runtime: Runtime, base: str, log: Log, rebuild: bool = False) -> BuiltImage:
-    """Build ``runtime``'s image on ``base`` (skipped when its tag already exists)."""
+def build_runtime_image(client, runtime: RuntimeSandboxNeeds, base: str, log: Log, rebuild: bool = False) -> BuiltImage:
+    """Build the image of the runtime with these ``needs`` on ``base`` (skipped when its tag already exists)."""
     tag = image_tag(runtime)
     started = time.monotonic()
     existing = find_image(client, tag)
@@ -273,7 +276,7 @@ def build_runtime_image(client, runtime: Runtime, base: str, log: Log, rebuild: 
         raise ImageError("\n".join(problems))
     labels = {LABEL_RUNTIME: runtime.name, LABEL_DIGEST: runtime.digest}
     toolchain = f"{tag}-toolchain"
-    _stream_build(client, log, runtime.name, path=str(runtime.path), tag=toolchain,
+    _stream_build(client, log, runtime.name, path=str(runtime.folder), tag=toolchain,
                   buildargs={"BASE": base}, labels=labels)
     _stream_build(client, log, runtime.name, fileobj=io.BytesIO(SUPERVISOR_LAYER.encode()), tag=tag,
                   buildargs={"TOOLCHAIN": toolchain}, labels=labels)

@@ -9,7 +9,8 @@ import os
 import tempfile
 from pathlib import Path
 
-from .base import RuntimeSandboxNeeds
+from ..vocabulary import RuntimeSandboxNeeds
+from .base import ClosingSandbox
 from .step_supervisor import read_regular_file, remove_tree, write_new_file
 
 LOG = logging.getLogger("assay.sandbox")
@@ -78,7 +79,7 @@ def candidate_env(needs: RuntimeSandboxNeeds, env: dict[str, str], home: str, tm
     return merged
 
 
-class LocalSandbox:
+class LocalSandbox(ClosingSandbox):
     """Owns one work root; subclasses set ``workspace_class`` and their checks."""
 
     workspace_class: type

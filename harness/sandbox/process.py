@@ -12,7 +12,7 @@ import signal
 import subprocess
 import time
 
-from .base import Limits, StepResult
+from ..vocabulary import Limits, StepResult
 from .cgroups import Cgroup, CgroupFactory
 # Bytes of stdout/stderr kept for diagnostics (the output limit counts everything produced),
 # kept the same way as inside the warm sandboxes.

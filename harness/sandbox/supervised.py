@@ -22,7 +22,8 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Callable, Protocol
 
-from .base import Limits, SandboxUnavailable, StepResult
+from ..vocabulary import Limits, StepResult
+from .base import SandboxError, SandboxUnavailable
 
 AGENT_SOURCE = Path(__file__).with_name("step_supervisor.py").read_text(encoding="utf-8")
 CALL_SECONDS = 60.0
@@ -30,7 +31,7 @@ HELLO_SECONDS = 60.0
 STEP_GRACE_SECONDS = 15.0  # beyond the step's own wall limit before the supervisor counts as lost
 
 
-class SupervisorTrouble(Exception):
+class SupervisorTrouble(SandboxError):
     """The sandbox or the channel to its supervisor failed: not the candidate's doing."""
 
 

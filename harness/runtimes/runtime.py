@@ -1,0 +1,318 @@
+"""Runtimes: one folder per language, holding ``runtime.yaml`` and jinja2 templates.
+
+The engine knows nothing about any language. A runtime says how to name things, how to render
+a prompt and a program (prompt + completion + test driver), which commands compile and run it,
+where a continuation should stop, and what its sandbox must expose.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+import shutil
+import subprocess
+from dataclasses import dataclass, field
+from functools import cached_property
+from pathlib import Path
+
+import jinja2
+
+from ..locations import runtime_search_path
+from ..problems import Problem
+from ..problems.types import GENERICS, SCALARS
+from ..vocabulary import STEP_DEFAULTS, LimitOverrides, Limits, RuntimeSandboxNeeds
+from ..yamlfiles import read_yaml
+from .filters import (NAMING_STYLES, chunked, float_class, float_literal, indent_lines, recase,
+                      utf16_units)
+
+RUNTIME_FILE = "runtime.yaml"
+# Toolchains are looked up on the PATH the sandbox sees, not the invoking user's.
+SANDBOX_PATH = "/usr/local/bin:/usr/bin:/bin"
+
+
+class RuntimeConfigError(ValueError):
+    """A runtime folder that is missing or malformed; the message names file and field."""
+
+
+@dataclass(frozen=True)
+class Step:
+    """A compile or run step: the command (list of argv strings) and its limit overrides."""
+
+    command: tuple[str, ...]
+    limits: LimitOverrides = field(default_factory=LimitOverrides)
+
+
+@dataclass
+class Runtime:
+    name: str
+    path: Path
+    display_name: str
+    source_file: str
+    compile: Step | None
+    run: Step
+    stop_sequences: tuple[str, ...]
+    naming: dict[str, str]
+    needs: RuntimeSandboxNeeds
+    version_command: tuple[str, ...]
+    limits: LimitOverrides
+    error_patterns: dict[str, tuple[str, ...]]
+    reference_indent: str = ""
+    reserved_words: frozenset[str] = frozenset()
+    reserved_rename: str = "{name}_"
+    unsupported_types: dict[str, str] = field(default_factory=dict)
+
+    @cached_property
+    def templates(self) -> jinja2.Environment:
+        env = jinja2.Environment(
+            loader=jinja2.FileSystemLoader(str(self.path)),
+            undefined=jinja2.StrictUndefined,
+            keep_trailing_newline=True,
+            trim_blocks=True,
+            lstrip_blocks=True,
+            autoescape=False,
+        )
+        env.filters.update(
+            json=lambda v: json.dumps(v, ensure_ascii=False),
+            json_ascii=lambda v: json.dumps(v, ensure_ascii=True),
+            float_literal=float_literal,
+            snake=lambda s: recase(s, "snake"),
+            camel=lambda s: recase(s, "camel"),
+            pascal=lambda s: recase(s, "pascal"),
+            indent_lines=indent_lines,
+            float_class=float_class,
+            chunked=chunked,
+            utf16_units=utf16_units,
+        )
+        env.globals["INT64_MIN"] = -(2**63)
+        return env
+
+    @property
+    def digest(self) -> str:
+        """Content hash of the runtime folder: it identifies exactly what rendered a program."""
+        return self.needs.digest
+
+    def name_of(self, kind: str, snake_name: str) -> str:
+        """A problem's snake_case name in this language's convention; a name that is a reserved
+        word here gets the runtime's ``reserved_rename`` pattern (``end`` -> ``end_``)."""
+        name = recase(snake_name, self.naming.get(kind, "snake"))
+        return self.reserved_rename.format(name=name) if name in self.reserved_words else name
+
+    def renamed(self, problem: Problem) -> list[tuple[str, str]]:
+        """The (problem name, name in this language) pairs that reserved words forced apart."""
+        names = [("function", problem.function)] + [("param", p.name) for p in problem.params]
+        return [(snake, self.name_of(kind, snake)) for kind, snake in names
+                if recase(snake, self.naming.get(kind, "snake")) in self.reserved_words]
+
+    def refusal(self, problem: Problem) -> str | None:
+        """Why this runtime cannot pose ``problem`` (a declared type it has no counterpart
+        for), or None when it can."""
+        declared = [(f"parameter {p.name}", p.type) for p in problem.params] + [("the result", problem.returns)]
+        for where, typ in declared:
+            for part in typ.walk():
+                if part.kind in self.unsupported_types:
+                    return (f"{self.name} cannot represent {part.kind} (declared by {where} of {problem.id}):"
+                            f" {self.unsupported_types[part.kind]}")
+        return None
+
+    def context(self, problem: Problem) -> dict:
+        return {
+            "problem": problem,
+            "function": self.name_of("function", problem.function),
+            "params": [
+                {"name": self.name_of("param", p.name), "type": p.type, "source_name": p.name}
+                for p in problem.params
+            ],
+            "returns": problem.returns,
+            "examples": problem.examples,
+            "description_lines": problem.description.splitlines(),
+        }
+
+    def reference_completion(self, problem: Problem) -> str:
+        """The problem's reference as a continuation of this runtime's prompt."""
+        return indent_lines(problem.reference[self.name], self.reference_indent) + "\n"
+
+    def render_prompt(self, problem: Problem) -> str:
+        return self.templates.get_template("prompt.j2").render(self.context(problem))
+
+    def render_preamble(self, problem: Problem) -> str:
+        """What precedes a whole-function completion (imports, an enclosing class opener)."""
+        try:
+            template = self.templates.get_template("preamble.j2")
+        except jinja2.TemplateNotFound:
+            return ""
+        return template.render(self.context(problem))
+
+    def render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
+        """The full source to run: the candidate's code followed by the generated test driver."""
+        context = self.context(problem)
+        context.update(code=code, cases=problem.cases, results_file=results_file, nonce=nonce)
+        return self.templates.get_template("program.j2").render(context)
+
+    def step_limits(self, kind: str, problem: LimitOverrides = LimitOverrides(),
+                    command_line: LimitOverrides = LimitOverrides()) -> Limits | None:
+        """The limits of this runtime's ``compile`` or ``run`` step (None: no such step).
+
+        The one place where layers meet, each overriding the ones before it: the engine's
+        ``STEP_DEFAULTS[kind]`` < runtime.yaml's ``limits`` < the step's own ``limits`` < the
+        problem's ``limits`` (run step only) < the command line (``--timeout``, ``--memory``).
+        """
+        step = self.compile if kind == "compile" else self.run
+        if step is None:
+            return None
+        layers = self.limits.then(step.limits)
+        if kind == "run":
+            layers = layers.then(problem)
+        return STEP_DEFAULTS[kind].merged(layers.then(command_line))
+
+    def toolchain_version(self) -> str | None:
+        """The host toolchain's version line, or None when it is not installed."""
+        path = dict(self.needs.env).get("PATH", SANDBOX_PATH)
+        if not self.version_command or shutil.which(self.version_command[0], path=path) is None:
+            return None
+        try:
+            done = subprocess.run(list(self.version_command), capture_output=True, text=True, timeout=30,
+                                  env={"PATH": path, "LANG": "C.UTF-8"})
+        except (OSError, subprocess.TimeoutExpired):
+            return None
+        text = (done.stdout or done.stderr).strip().splitlines()
+        return text[0] if text else None
+
+
+def find_runtime_dir(name: str, extra: list[Path] | None = None) -> Path:
+    for root in runtime_search_path(extra):
+        candidate = root / name
+        if (candidate / RUNTIME_FILE).is_file():
+            return candidate
+    raise RuntimeConfigError(
+        f"unknown runtime {name!r}; known: {', '.join(available_runtimes(extra)) or 'none'}"
+        " (add folders with --runtimes-dir or ASSAY_RUNTIMES_PATH)"
+    )
+
+
+def available_runtimes(extra: list[Path] | None = None) -> list[str]:
+    names: dict[str, None] = {}
+    for root in runtime_search_path(extra):
+        if root.is_dir():
+            for child in sorted(root.iterdir()):
+                if (child / RUNTIME_FILE).is_file():
+                    names.setdefault(child.name, None)
+    return sorted(names)
+
+
+def load_runtime(name: str, extra: list[Path] | None = None) -> Runtime:
+    return load_runtime_folder(find_runtime_dir(name, extra))
+
+
+def load_runtime_folder(path: Path) -> Runtime:
+    file = path / RUNTIME_FILE
+    if not file.is_file():
+        raise RuntimeConfigError(f"{file}: missing (not a runtime folder)")
+    return parse_runtime(read_yaml(file, RuntimeConfigError), path, file)
+
+
+def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
+    def fail(field_name: str, message: str) -> RuntimeConfigError:
+        return RuntimeConfigError(f"{file}: field '{field_name}': {message}")
+
+    if not isinstance(data, dict):
+        raise RuntimeConfigError(f"{file}: expected a mapping at the top level")
+    if data.get("name", path.name) != path.name:
+        raise fail("name", f"must equal the folder name {path.name!r}")
+
+    def step(key: str) -> Step | None:
+        raw = data.get(key)
+        if raw is None:
+            return None
+        if not isinstance(raw, dict) or not _str_list(raw.get("command")):
+            raise fail(key, "expected a mapping with 'command': a list of strings")
+        return Step(tuple(raw["command"]), _limits(raw.get("limits"), lambda m: fail(f"{key}.limits", m)))
+
+    run = step("run")
+    if run is None:
+        raise fail("run", "missing")
+    source_file = data.get("source_file")
+    if not isinstance(source_file, str) or "/" in source_file:
+        raise fail("source_file", "expected a plain file name such as main.py")
+    for template in ("prompt.j2", "program.j2"):
+        if not (path / template).is_file():
+            raise RuntimeConfigError(f"{path}: template {template} is missing")
+    naming = data.get("naming", {}) or {}
+    for kind, style in naming.items():
+        if style not in NAMING_STYLES:
+            raise fail(f"naming.{kind}", f"{style!r} is not one of {', '.join(NAMING_STYLES)}")
+    stops = data.get("stop_sequences", [])
+    if not _str_list(stops, allow_empty=True):
+        raise fail("stop_sequences", "expected a list of strings")
+    sandbox = data.get("sandbox", {}) or {}
+    ro_binds = sandbox.get("ro_binds", [])
+    if not _str_list(ro_binds, allow_empty=True):
+        raise fail("sandbox.ro_binds", "expected a list of absolute paths")
+    env = sandbox.get("env", {}) or {}
+    if not isinstance(env, dict):
+        raise fail("sandbox.env", "expected a mapping of names to values")
+    limits = _limits(data.get("limits"), lambda m: fail("limits", m))
+    patterns = data.get("error_patterns", {}) or {}
+    if not isinstance(patterns, dict) or not all(_str_list(v, allow_empty=True) for v in patterns.values()):
+        raise fail("error_patterns", "expected a mapping of outcome to a list of strings")
+    version = data.get("version_command", [])
+    reserved = data.get("reserved_words", [])
+    if not _str_list(reserved, allow_empty=True):
+        raise fail("reserved_words", "expected a list of strings")
+    rename = data.get("reserved_rename", "{name}_")
+    if not isinstance(rename, str) or "{name}" not in rename or rename == "{name}":
+        raise fail("reserved_rename", "expected a pattern containing {name}, such as '{name}_'")
+    try:
+        rename.format(name="x")
+    except (KeyError, IndexError, ValueError) as exc:
+        raise fail("reserved_rename", f"not a valid pattern: {exc}") from None
+    unsupported = data.get("unsupported_types", {}) or {}
+    if not isinstance(unsupported, dict) or not all(isinstance(k, str) and isinstance(v, str)
+                                                    for k, v in unsupported.items()):
+        raise fail("unsupported_types", "expected a mapping of type name to the reason it is refused")
+    unknown = set(unsupported) - set(SCALARS) - set(GENERICS)
+    if unknown:
+        raise fail("unsupported_types", f"unknown type name(s) {', '.join(sorted(unknown))}")
+    return Runtime(
+        name=path.name,
+        path=path,
+        display_name=str(data.get("display_name", path.name)),
+        source_file=source_file,
+        compile=step("compile"),
+        run=run,
+        stop_sequences=tuple(stops),
+        naming=dict(naming),
+        needs=RuntimeSandboxNeeds(
+            name=path.name,
+            ro_binds=tuple(ro_binds),
+            env=tuple((str(k), str(v)) for k, v in env.items()),
+            image=sandbox.get("image"),
+            folder=str(path),
+            digest=folder_digest(path),
+        ),
+        version_command=tuple(version) if _str_list(version, allow_empty=True) else (),
+        limits=limits,
+        error_patterns={k: tuple(v) for k, v in patterns.items()},
+        reference_indent=str(data.get("reference_indent", "")),
+        reserved_words=frozenset(reserved),
+        reserved_rename=rename,
+        unsupported_types=dict(unsupported),
+    )
+
+
+def _str_list(value: object, allow_empty: bool = False) -> bool:
+    return isinstance(value, list) and (allow_empty or value) and all(isinstance(v, str) for v in value)
+
+
+def _limits(raw: object, fail) -> LimitOverrides:
+    try:
+        return LimitOverrides.parse(raw)
+    except ValueError as exc:
+        raise fail(str(exc)) from None
+
+
+def folder_digest(path: Path) -> str:
+    """Content hash of a folder's files (names and bytes)."""
+    hasher = hashlib.sha256()
+    for file in sorted(p for p in path.rglob("*") if p.is_file()):
+        hasher.update(str(file.relative_to(path)).encode() + b"\0" + file.read_bytes() + b"\0")
+    return hasher.hexdigest()
