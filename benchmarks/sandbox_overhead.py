@@ -28,7 +28,7 @@ from harness.engine.execution import Executor  # noqa: E402
 from harness.problems import load_problem_set  # noqa: E402
 from harness.runtimes import load_runtime  # noqa: E402
 from harness.sandbox import SandboxUnavailable, make_sandbox  # noqa: E402
-from harness.render.text import render  # noqa: E402
+from harness.console import render  # noqa: E402
 
 TARGETS = {"bubblewrap": 1.15, "docker": 1.5}
 BACKENDS = ("none", "bubblewrap", "docker")

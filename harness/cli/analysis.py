@@ -15,7 +15,7 @@ import typer
 from ..metrics import parse_ks
 from ..metrics.stats import DEFAULT_CONFIDENCE, DEFAULT_RESAMPLES, DEFAULT_SEED, METHODS
 from ..store import SUMMARY
-from ..render.text import use_colour
+from ..console import use_colour
 from .common import fail
 
 KOption = typer.Option(None, "--k", help="Comma-separated k values (default: the k values the run(s) were scored with).")

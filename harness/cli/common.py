@@ -10,7 +10,7 @@ from typing import List, Optional
 import typer
 
 from ..problems import ProblemError, ProblemSet, load_problem_set
-from ..render.text import paint, use_colour
+from ..console import paint, use_colour
 from ..runtimes import Runtime, RuntimeConfigError, load_runtime
 from ..vocabulary import LimitOverrides
 

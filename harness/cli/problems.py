@@ -8,7 +8,7 @@ from typing import List, Optional
 
 import typer
 
-from ..render.text import render, use_colour
+from ..console import render, use_colour
 from ..runtimes import available_runtimes
 from .common import RuntimesDir, check_mark, load_runtimes, load_set, open_sandbox
 

@@ -9,7 +9,7 @@ from typing import List, Optional
 
 import typer
 
-from ..render.text import paint, render, use_colour
+from ..console import paint, render, use_colour
 from ..runtimes import RuntimeConfigError, available_runtimes, load_runtime
 from ..vocabulary import LimitOverrides
 from .common import RuntimesDir, check_mark, fail, load_runtimes, load_set, open_sandbox

@@ -8,7 +8,7 @@ from typing import Optional
 
 import typer
 
-from ..render.text import render
+from ..console import render
 from ..sandbox import SandboxUnavailable
 from .common import fail
 

@@ -12,7 +12,7 @@ import typer
 from ..engine.completions import MODES
 from ..metrics import parse_ks
 from ..render.summary import pass_table
-from ..render.text import use_colour
+from ..console import use_colour
 from ..runtimes import available_runtimes
 from ..sandbox import backends
 from ..store import StoreBusy, StoreMismatch, StoreWriteError

@@ -24,12 +24,13 @@ def check_references(problem_set: ProblemSet, runtimes: dict[str, Runtime], sand
             if reason:
                 results.append({"problem": problem.id, "language": language, "outcome": "unsupported",
                                 "detail": reason})
-            elif language in problem.reference:
+            elif runtimes[language].reference(problem) is not None:
                 completion = runtimes[language].reference_completion(problem)
                 samples.append(Sample(problem.id, language, 0, completion, str(problem.source), 0))
             else:
                 results.append({"problem": problem.id, "language": language, "outcome": "missing",
-                                "detail": f"no reference.{language} in {problem.source}"})
+                                "detail": f"no reference.{language} in {problem.source}, nor in "
+                                          f"{runtimes[language].path / 'references' / problem.source.parent.name}"})
     with futures.ThreadPoolExecutor(max_workers=jobs) as pool:
         for sample, verdict in zip(samples, pool.map(executor.execute, samples)):
             results.append({"problem": sample.problem, "language": sample.language, "outcome": verdict.outcome,
@@ -99,7 +100,7 @@ def check_runtime(runtime: Runtime, problem_set: ProblemSet, sandbox: Sandbox, j
             rows.append({"check": f"reference {problem.id}", "expect": "unsupported", "outcome": "unsupported",
                          "detail": reason, "ok": True})
             continue
-        if runtime.name not in problem.reference:
+        if runtime.reference(problem) is None:
             rows.append({"check": f"reference {problem.id}", "expect": "passed", "outcome": "missing",
                          "detail": f"no {runtime.name} reference", "ok": False})
             continue

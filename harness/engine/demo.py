@@ -47,11 +47,11 @@ def render_form(runtime: Runtime, problem, form: str) -> str:
     return runtime.templates.get_template(f"demo/{form}.j2").render(context)
 
 
-def demo_problems(problem_set: ProblemSet, language: str) -> list:
+def demo_problems(problem_set: ProblemSet, runtime: Runtime) -> list:
     """The same problems for every language where references allow: those with the most
     references first, spread over difficulties, at most PROBLEMS_PER_LANGUAGE."""
     ranked = sorted(problem_set.problems.values(), key=lambda p: (-len(p.reference), p.id))
-    return [p for p in ranked if language in p.reference][:PROBLEMS_PER_LANGUAGE]
+    return [p for p in ranked if runtime.reference(p) is not None][:PROBLEMS_PER_LANGUAGE]
 
 
 def write_dump(path: Path, label: str, chance: float, problem_set: ProblemSet, runtimes: dict[str, Runtime]) -> int:
@@ -59,7 +59,7 @@ def write_dump(path: Path, label: str, chance: float, problem_set: ProblemSet, r
     rows = 0
     with open(path, "w", encoding="utf-8") as handle:
         for name, runtime in runtimes.items():
-            for problem in demo_problems(problem_set, name):
+            for problem in demo_problems(problem_set, runtime):
                 available = set(demo_templates(runtime))
                 faults = [f for f in FAULT_WEIGHTS if f in available]
                 correct = [f for f in CORRECT_FORMS if f == "reference" or f in available]

@@ -20,7 +20,7 @@ from ..vocabulary import LimitOverrides, Verdict
 from .execution import Executor
 from ..metrics import summarize
 from ..problems import ProblemSet
-from ..render.progress import Progress
+from ..console import Progress
 from ..runtimes import Runtime
 from .scheduling import interleave
 from ..sandbox import Sandbox

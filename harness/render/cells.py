@@ -6,7 +6,7 @@ import json
 
 from ..analysis.report import MARKS, trust_flag
 from ..vocabulary import OUTCOMES
-from .text import render as render_columns
+from ..console import render as render_columns
 
 BAR_WIDTH = 40
 BAR_CHARS = {"passed": "#", "wrong_answer": "=", "compile_error": "c", "runtime_error": "x", "timeout": "t",

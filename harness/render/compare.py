@@ -4,7 +4,7 @@ from __future__ import annotations
 
 from ..analysis.report import MARKS, TRUST_MARKS
 from .cells import pct
-from .text import paint, render as render_columns
+from ..console import paint, render as render_columns
 
 
 def _p(value: float | None) -> str:

@@ -3,7 +3,7 @@
 from __future__ import annotations
 
 from ..vocabulary import OUTCOMES
-from .text import paint, render
+from ..console import paint, render
 
 SHORT = {
     "passed": "pass", "wrong_answer": "wrong", "compile_error": "compile", "runtime_error": "crash",

@@ -7,7 +7,7 @@ from ..vocabulary import OUTCOMES
 from .cells import (BAR_CHARS, describe_settings, figure_cell, flag_footnote, flaky_text, notes_cell, provenance_lines,
                     text_bar, timing_cells)
 from .summary import SHORT, pass_table
-from .text import paint, render as render_columns
+from ..console import paint, render as render_columns
 
 
 def render_table(report: dict, colour: bool = False, summary: dict | None = None) -> str:

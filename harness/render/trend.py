@@ -6,7 +6,7 @@ from pathlib import Path
 
 from ..analysis.report import MARKS, TRUST_MARKS
 from .cells import figure_cell
-from .text import paint, render as render_columns
+from ..console import paint, render as render_columns
 
 
 def render_trend(trend: dict, colour: bool = False) -> str:

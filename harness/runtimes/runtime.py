@@ -127,9 +127,20 @@ class Runtime:
             "description_lines": problem.description.splitlines(),
         }
 
+    def reference(self, problem: Problem) -> str | None:
+        """The problem's reference in this language: from the problem set (its YAML or its
+        ``references/<language>/`` folder), else from this runtime's own folder,
+        ``references/<set folder>/<problem id>.<ext>``, so a runtime kept anywhere can carry the
+        references of the sets it must pass (the conformance set above all)."""
+        if self.name in problem.reference:
+            return problem.reference[self.name]
+        folder = self.path / "references" / problem.source.parent.name
+        found = sorted(folder.glob(f"{problem.id}.*")) if folder.is_dir() else []
+        return found[0].read_text(encoding="utf-8") if found else None
+
     def reference_completion(self, problem: Problem) -> str:
         """The problem's reference as a continuation of this runtime's prompt."""
-        return indent_lines(problem.reference[self.name], self.reference_indent) + "\n"
+        return indent_lines(self.reference(problem), self.reference_indent) + "\n"
 
     def render_prompt(self, problem: Problem) -> str:
         return self.templates.get_template("prompt.j2").render(self.context(problem))
