@@ -16,6 +16,8 @@ def write_skeleton(name: str, target: Path) -> None:
     if target.exists():
         raise FileExistsError(f"{target} already exists")
     target.mkdir(parents=True)
-    for source in sorted(SKELETON_DIR.iterdir()):
+    for source in sorted(p for p in SKELETON_DIR.iterdir() if p.is_file()):
         (target / source.name).write_text(source.read_text(encoding="utf-8").replace("{{NAME}}", name),
                                           encoding="utf-8")
+    # Where the runtime keeps the references of the sets it must pass (see runtime.yaml).
+    (target / "references" / "conformance").mkdir(parents=True)
