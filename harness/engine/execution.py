@@ -297,7 +297,7 @@ def _first_error(text: str) -> str:
     the message that matters, and the first error is the one that explains the rest."""
     lines = text.strip().splitlines()
     for i, line in enumerate(lines):
-        if re.search(r"\berror\b", line, re.IGNORECASE):
+        if re.search(r"\w*error\b", line, re.IGNORECASE):  # error, SyntaxError, error TS1109
             return _clip("\n".join(lines[i:]))
     return _clip("\n".join(lines))
 
