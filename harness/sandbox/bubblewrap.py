@@ -30,7 +30,7 @@ import time
 from dataclasses import dataclass
 from pathlib import Path
 
-from . import cgroups
+from . import cgroups, seccomp
 from .base import Limits, RuntimeSandboxNeeds, SandboxUnavailable, StepResult
 from .cgroups import Cgroup
 from .local import BASE_PATH, LOG, LocalSandbox, LocalWorkspace, candidate_env, private_folder, remove_folder
@@ -139,17 +139,24 @@ class BubblewrapSandbox(LocalSandbox):
             raise SandboxUnavailable(
                 "bubblewrap (bwrap) is not installed; on Debian/Ubuntu: apt-get install bubblewrap"
             )
-        probe = run_limited(
-            self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}) + ["--", "/bin/true"],
-            cwd=str(self.work_root),
-            env={"PATH": "/usr/bin:/bin"},
-            limits=Limits(wall_seconds=20, cpu_seconds=20),
-            cgroups=self.cgroups,
-            user=self.run_as,
-        )
+        filter_fd = seccomp.program_fd()
+        try:
+            probe = run_limited(
+                self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}, seccomp_fd=filter_fd)
+                + ["--", "/bin/true"],
+                cwd=str(self.work_root),
+                env={"PATH": "/usr/bin:/bin"},
+                limits=Limits(wall_seconds=20, cpu_seconds=20),
+                cgroups=self.cgroups,
+                user=self.run_as,
+                pass_fds=(filter_fd,),
+            )
+        finally:
+            os.close(filter_fd)
         if not probe.ok:
             raise SandboxUnavailable(
-                "bubblewrap cannot create a sandbox here (user namespaces disabled?): "
+                "bubblewrap cannot create a sandbox here (user namespaces disabled, or a kernel without "
+                "seccomp filters?): "
                 + (probe.infra_error or probe.stderr.strip()[:300] or f"exit {probe.exit_code}")
             )
         try:
@@ -184,6 +191,7 @@ class BubblewrapSandbox(LocalSandbox):
             "user": "nobody" if self.run_as == NOBODY else "invoking user",
             "isolation": ("warm sandbox per worker: network, pid, IPC, UTS, cgroup and user namespaces; "
                           "read-only system; /work, /tmp and /dev/shm emptied between candidates"),
+            "syscall_filter": seccomp.describe(),
             "supervisor": "pid-1 step supervisor (harness/sandbox/step_supervisor.py) on the host's python3",
             "max_runs_per_sandbox": self.max_runs,
         }
@@ -235,13 +243,17 @@ class BubblewrapSandbox(LocalSandbox):
             if self.cgroups is not None:
                 group = self.cgroups.create(memory, processes)
             python, extra_binds = supervisor_python()
-            argv = self.bwrap_argv(folder, needs, {}, extra_binds)
-            argv += ["--as-pid-1", "--", python, "-I", "-S", "-B", "-c", AGENT_SOURCE]
-            process = self._launcher.submit(
-                subprocess.Popen, argv, cwd=str(folder), env={"PATH": "/usr/bin:/bin"}, stdin=subprocess.PIPE,
-                stdout=subprocess.PIPE, stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
-                preexec_fn=join_and_drop(group, self.run_as),
-            ).result()
+            filter_fd = seccomp.program_fd()
+            try:
+                argv = self.bwrap_argv(folder, needs, {}, extra_binds, seccomp_fd=filter_fd)
+                argv += ["--as-pid-1", "--", python, "-I", "-S", "-B", "-c", AGENT_SOURCE]
+                process = self._launcher.submit(
+                    subprocess.Popen, argv, cwd=str(folder), env={"PATH": "/usr/bin:/bin"}, stdin=subprocess.PIPE,
+                    stdout=subprocess.PIPE, stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
+                    pass_fds=(filter_fd,), preexec_fn=join_and_drop(group, self.run_as),
+                ).result()
+            finally:
+                os.close(filter_fd)  # bubblewrap has read it by the time it runs the supervisor
         except BaseException:
             if group is not None:
                 self.guarded("removing a cgroup", group.remove)
@@ -301,9 +313,10 @@ class BubblewrapSandbox(LocalSandbox):
 
     # -- the bubblewrap command --
     def bwrap_argv(self, work: Path, needs: RuntimeSandboxNeeds, env: dict[str, str],
-                   extra_binds: tuple[str, ...] = ()) -> list[str]:
+                   extra_binds: tuple[str, ...] = (), *, seccomp_fd: int) -> list[str]:
         argv = [
             self.bwrap,
+            "--seccomp", str(seccomp_fd),  # harness/sandbox/seccomp.py: keyring, namespaces, mounts...
             "--unshare-all",  # network, pid, ipc, uts, cgroup, user namespaces
             "--die-with-parent",  # and with bubblewrap's own process, everything in the sandbox
             "--new-session",
