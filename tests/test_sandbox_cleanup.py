@@ -7,6 +7,7 @@ import logging
 import os
 import subprocess
 import tempfile
+import time
 from pathlib import Path
 
 import pytest
@@ -143,6 +144,33 @@ def test_a_retired_sandbox_holding_a_deep_tree_leaves_nothing_on_the_host(shm_ro
     finally:
         box.close()
     assert files_under(shm_root) == []
+    assert box.cleanup_problems == []
+
+
+def test_a_retired_sandbox_leaves_no_orphan_and_no_cgroup(shm_root):
+    # The supervisor (the sandbox's pid 1) is ended before bubblewrap, which reaps it: killed the
+    # other way round, it became a zombie of the host's init, and its cgroup, busy until init
+    # reaped it (seconds here), was left behind.
+    from harness.sandbox.bubblewrap import _children
+
+    box = open_backend("bubblewrap", shm_root)
+    try:
+        if box.cgroups is None:
+            pytest.skip("no writable cgroup hierarchy here")
+        with box.workspace(NEEDS) as space:
+            slot = space.slot
+            supervisor = _children(slot.process.pid)
+            space.write("probe.py", "import subprocess\nsubprocess.Popen(['sleep', '30'], start_new_session=True)\n")
+            space.run(["python3", "-I", "probe.py"], LIMITS, {})
+        assert slot.spoiled and len(supervisor) == 1
+        slot.process.wait(timeout=10)
+        assert not os.path.exists(f"/proc/{supervisor[0]}"), "the supervisor outlived bubblewrap unreaped"
+        deadline = time.monotonic() + 15
+        while any(d.exists() for d in slot.cgroup.dirs) and time.monotonic() < deadline:
+            time.sleep(0.05)
+        assert [str(d) for d in slot.cgroup.dirs if d.exists()] == []
+    finally:
+        box.close()
     assert box.cleanup_problems == []
 
 

@@ -71,6 +71,7 @@ class Slot(Member):
     cgroup: Cgroup | None
     memory: int = 0
     processes: int = 0
+    supervisor: int | None = None  # a pidfd for the supervisor, bubblewrap's child
 
 
 class BubblewrapWorkspace(LocalWorkspace):
@@ -265,6 +266,7 @@ class BubblewrapSandbox(LocalSandbox):
             hello = slot.channel.call({"op": "hello"}, HELLO_SECONDS)
             if hello["pid"] != 1:
                 raise SupervisorTrouble(f"the supervisor runs as pid {hello['pid']}, not 1")
+            slot.supervisor = child_pidfd(process.pid)
         except BaseException:
             self.discard(slot)
             raise
@@ -290,20 +292,37 @@ class BubblewrapSandbox(LocalSandbox):
         return (limits.memory_mb + SUPERVISOR_MB) * 2**20, limits.max_processes + SUPERVISOR_PROCESSES
 
     def discard(self, slot: Slot) -> None:
-        """End a sandbox at once (killing bubblewrap's process takes its pid 1, and so the whole
-        pid namespace, with it); its cgroup and folder go in the background. Never raises."""
+        """End a sandbox at once; its cgroup and folder go in the background. Never raises.
+
+        The supervisor goes first: it is the sandbox's pid 1, so the kernel ends every process in
+        the sandbox with it, and bubblewrap, its parent, reaps it and exits. Killing bubblewrap
+        first would orphan the supervisor to the host's init, which may be slow to reap it (or
+        never do), and its cgroup stays busy until then."""
         slot.channel.close()
-        with contextlib.suppress(ProcessLookupError, PermissionError):
-            os.killpg(slot.process.pid, signal.SIGKILL)
+        if not signal_pidfd(slot.supervisor, signal.SIGKILL):
+            self._kill_bubblewrap(slot)
 
         def clean_up() -> None:
-            with contextlib.suppress(subprocess.TimeoutExpired):
-                slot.process.wait(timeout=30)
-            if slot.cgroup is not None:
-                self.guarded("removing a cgroup", slot.cgroup.remove)
+            try:
+                slot.process.wait(timeout=10)
+            except subprocess.TimeoutExpired:
+                self._kill_bubblewrap(slot)
+                with contextlib.suppress(subprocess.TimeoutExpired):
+                    slot.process.wait(timeout=30)
+            if slot.supervisor is not None:
+                with contextlib.suppress(OSError):
+                    os.close(slot.supervisor)
+            if slot.cgroup is not None and not slot.cgroup.remove(wait_seconds=30):
+                self.note(f"could not remove the cgroup {', '.join(map(str, slot.cgroup.dirs))}: still busy")
+                LOG.warning("assay: bubblewrap sandbox: cgroup %s left behind (still busy)", slot.cgroup.dirs[0])
             self.note(remove_folder(slot.folder))  # however deep a tree the candidate left
 
-        self.background(clean_up)
+        self.background(lambda: self.guarded("cleaning up after a sandbox", clean_up))
+
+    @staticmethod
+    def _kill_bubblewrap(slot: Slot) -> None:
+        with contextlib.suppress(ProcessLookupError, PermissionError):
+            os.killpg(slot.process.pid, signal.SIGKILL)
 
     def background(self, job) -> None:
         try:
@@ -342,6 +361,52 @@ class BubblewrapSandbox(LocalSandbox):
         for key, value in candidate_env(needs, env, home=WORK_DIR, tmp="/tmp").items():
             argv += ["--setenv", key, value]
         return argv
+
+
+def child_pidfd(parent: int) -> int | None:
+    """A pidfd for the one child of bubblewrap's process ``parent`` (the supervisor), or None
+    where it cannot be had (no pidfds before Linux 5.3). A pidfd, unlike a pid, can never
+    name another process that took the number over."""
+    for pid in _children(parent):
+        try:
+            fd = os.pidfd_open(pid)
+        except (AttributeError, OSError):
+            continue
+        if _parent_of(pid) == parent:  # still that child once the pidfd holds it
+            return fd
+        os.close(fd)
+    return None
+
+
+def signal_pidfd(fd: int | None, sig: int) -> bool:
+    """Send ``sig`` through a pidfd; False when there is none or it cannot be used."""
+    if fd is None:
+        return False
+    try:
+        signal.pidfd_send_signal(fd, sig)
+    except ProcessLookupError:
+        return True  # already gone
+    except (AttributeError, OSError):
+        return False
+    return True
+
+
+def _children(parent: int) -> list[int]:
+    try:
+        return [int(pid) for task in os.listdir(f"/proc/{parent}/task")
+                for pid in Path(f"/proc/{parent}/task/{task}/children").read_text().split()]
+    except OSError:  # a kernel without /proc/PID/task/TID/children: every process's parent
+        return [int(name) for name in os.listdir("/proc") if name.isdigit() and _parent_of(int(name)) == parent]
+
+
+def _parent_of(pid: int) -> int | None:
+    try:
+        for line in Path(f"/proc/{pid}/status").read_text().splitlines():
+            if line.startswith("PPid:"):
+                return int(line.split()[1])
+    except (OSError, ValueError, IndexError):
+        pass
+    return None
 
 
 def supervisor_python() -> tuple[str, tuple[str, ...]]:
