@@ -193,6 +193,23 @@ def test_close_never_raises_when_a_folder_cannot_be_removed(name, shm_root, monk
     real(str(box.work_root))
 
 
+def test_docker_close_never_raises_when_containers_cannot_be_removed(monkeypatch, caplog):
+    import harness.sandbox.docker as docker_backend
+
+    box = open_backend("docker")
+    run_python(box, "print(1)")
+    real = docker_backend.remove_containers
+
+    def refuse(*args, **kwargs):
+        raise RuntimeError("refused by the test")
+
+    monkeypatch.setattr(docker_backend, "remove_containers", refuse)
+    with caplog.at_level(logging.WARNING, logger="assay.sandbox"):
+        box.close()  # logged, not raised
+    assert "could not remove this run's containers" in caplog.text and "refused by the test" in caplog.text
+    real(box.client, run_id=box.run_id)
+
+
 def test_assay_score_survives_a_deep_tree_and_leaves_nothing(shm_root, tiny_set, tmp_path, monkeypatch):
     # The candidate passes, so nothing retires its sandbox early: the supervisor empties /work
     # between candidates and the whole work root goes at close.
