@@ -2,8 +2,8 @@
 
 Each worker keeps a warm sandbox: one bubblewrap launch (no network, own pid, IPC, UTS, cgroup
 and user namespaces; the system bound read-only; only ``/work``, ``/tmp`` and ``/dev/shm``
-writable; a clean environment; as the unprivileged ``nobody`` user when Assay runs as root)
-whose pid 1 is the step supervisor (``step_supervisor.py``, as in the Docker backend). Why warm:
+writable; a clean environment; a seccomp filter of our own, ``seccomp.py``; as the
+unprivileged ``nobody`` user when Assay runs as root) whose pid 1 is the step supervisor (``step_supervisor.py``, as in the Docker backend). Why warm:
 building the namespaces and mounts costs about ten milliseconds per launch, as much as a whole
 Python candidate; the supervisor starts a step with a plain fork/exec.
 
