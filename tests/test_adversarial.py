@@ -143,14 +143,16 @@ def fill(text: str, host: dict, tag: str) -> str:
 def leftover_files(backend) -> list[Path]:
     """What is under the sandbox's work root once the candidate has gone: a warm sandbox's
     folder, emptied for the next candidate, holds nothing; any other folder is removed (a
-    retired sandbox's in the background, hence the wait)."""
-    idle = [slot for pool in getattr(backend, "pools", {}).values() for slot in pool.idle]
-    for slot in idle:
-        slot.settle()  # reads the supervisor's report on emptying it
-    warm = {slot.folder for slot in idle if slot.spoiled is None}
-    retiring = {slot.folder for slot in idle} - warm  # discarded at their next checkout
-    deadline = time.monotonic() + 10
+    retired sandbox's in the background, hence the wait). The warm ones are looked up again
+    while waiting: the replacement for a retired sandbox joins them once it has started, which
+    on a loaded machine can take many seconds."""
+    deadline = time.monotonic() + 30
     while True:
+        idle = [slot for pool in getattr(backend, "pools", {}).values() for slot in pool.idle]
+        for slot in idle:
+            slot.settle()  # reads the supervisor's report on emptying it
+        warm = {slot.folder for slot in idle if slot.spoiled is None}
+        retiring = {slot.folder for slot in idle} - warm  # discarded at their next checkout
         found = [path for path in Path(backend.work_root).iterdir() if path not in warm | retiring]
         if not found or time.monotonic() > deadline:
             break
@@ -199,5 +201,8 @@ def test_hostile_candidate_is_contained(language, control, attack, backend, host
     if getattr(backend, "work_root", None) is not None:
         assert leftover_files(backend) == [], "a candidate's files were left behind"
 
-    # The next candidate is unaffected.
-    assert run(control).outcome == "passed"
+    # The next candidate is unaffected, and a sandbox retired when it was checked out is gone.
+    after = run(control)
+    assert after.outcome == "passed", f"the next candidate: {after.outcome}: {after.detail}"
+    if getattr(backend, "work_root", None) is not None:
+        assert leftover_files(backend) == [], "a retired sandbox's files were left behind"

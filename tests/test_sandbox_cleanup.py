@@ -7,6 +7,7 @@ import logging
 import os
 import subprocess
 import tempfile
+import time
 from pathlib import Path
 
 import pytest
@@ -147,6 +148,33 @@ def test_a_retired_sandbox_holding_a_deep_tree_leaves_nothing_on_the_host(shm_ro
     assert box.cleanup_problems == []
 
 
+def test_a_retired_sandbox_leaves_no_orphan_and_no_cgroup(shm_root):
+    # The supervisor (the sandbox's pid 1) is ended before bubblewrap, which reaps it: killed the
+    # other way round, it became a zombie of the host's init, and its cgroup, busy until init
+    # reaped it (seconds here), was left behind.
+    from harness.sandbox.bubblewrap import _children
+
+    box = open_backend("bubblewrap", shm_root)
+    try:
+        if box.cgroups is None:
+            pytest.skip("no writable cgroup hierarchy here")
+        with box.workspace(NEEDS) as space:
+            slot = space.slot
+            supervisor = _children(slot.process.pid)
+            space.write("probe.py", "import subprocess\nsubprocess.Popen(['sleep', '30'], start_new_session=True)\n")
+            space.run(["python3", "-I", "probe.py"], LIMITS, {})
+        assert slot.spoiled and len(supervisor) == 1
+        slot.process.wait(timeout=10)
+        assert not os.path.exists(f"/proc/{supervisor[0]}"), "the supervisor outlived bubblewrap unreaped"
+        deadline = time.monotonic() + 15
+        while any(d.exists() for d in slot.cgroup.dirs) and time.monotonic() < deadline:
+            time.sleep(0.05)
+        assert [str(d) for d in slot.cgroup.dirs if d.exists()] == []
+    finally:
+        box.close()
+    assert box.cleanup_problems == []
+
+
 @pytest.mark.parametrize("name", ["bubblewrap", "none"])
 def test_close_never_raises_when_a_folder_cannot_be_removed(name, shm_root, monkeypatch, caplog):
     box = open_backend(name, shm_root)
@@ -164,6 +192,23 @@ def test_close_never_raises_when_a_folder_cannot_be_removed(name, shm_root, monk
     assert any("refused by the test" in problem for problem in box.cleanup_problems)
     assert "refused by the test" in caplog.text
     real(str(box.work_root))
+
+
+def test_docker_close_never_raises_when_containers_cannot_be_removed(monkeypatch, caplog):
+    import harness.sandbox.docker as docker_backend
+
+    box = open_backend("docker")
+    run_python(box, "print(1)")
+    real = docker_backend.remove_containers
+
+    def refuse(*args, **kwargs):
+        raise RuntimeError("refused by the test")
+
+    monkeypatch.setattr(docker_backend, "remove_containers", refuse)
+    with caplog.at_level(logging.WARNING, logger="assay.sandbox"):
+        box.close()  # logged, not raised
+    assert "could not remove this run's containers" in caplog.text and "refused by the test" in caplog.text
+    real(box.client, run_id=box.run_id)
 
 
 def test_assay_score_survives_a_deep_tree_and_leaves_nothing(shm_root, tiny_set, tmp_path, monkeypatch):

@@ -2,8 +2,8 @@
 
 Each worker keeps a warm sandbox: one bubblewrap launch (no network, own pid, IPC, UTS, cgroup
 and user namespaces; the system bound read-only; only ``/work``, ``/tmp`` and ``/dev/shm``
-writable; a clean environment; as the unprivileged ``nobody`` user when Assay runs as root)
-whose pid 1 is the step supervisor (``step_supervisor.py``, as in the Docker backend). Why warm:
+writable; a clean environment; a seccomp filter of our own, ``seccomp.py``; as the
+unprivileged ``nobody`` user when Assay runs as root) whose pid 1 is the step supervisor (``step_supervisor.py``, as in the Docker backend). Why warm:
 building the namespaces and mounts costs about ten milliseconds per launch, as much as a whole
 Python candidate; the supervisor starts a step with a plain fork/exec.
 
@@ -30,7 +30,7 @@ import time
 from dataclasses import dataclass
 from pathlib import Path
 
-from . import cgroups
+from . import cgroups, seccomp
 from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
 from .base import SandboxUnavailable
 from .cgroups import Cgroup
@@ -72,6 +72,7 @@ class Slot(Member):
     cgroup: Cgroup | None
     memory: int = 0
     processes: int = 0
+    supervisor: int | None = None  # a pidfd for the supervisor, bubblewrap's child
 
 
 class BubblewrapWorkspace(LocalWorkspace):
@@ -140,17 +141,24 @@ class BubblewrapSandbox(LocalSandbox):
             raise SandboxUnavailable(
                 "bubblewrap (bwrap) is not installed; on Debian/Ubuntu: apt-get install bubblewrap"
             )
-        probe = run_limited(
-            self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}) + ["--", "/bin/true"],
-            cwd=str(self.work_root),
-            env={"PATH": "/usr/bin:/bin"},
-            limits=Limits(wall_seconds=20, cpu_seconds=20),
-            cgroups=self.cgroups,
-            user=self.run_as,
-        )
+        filter_fd = seccomp.program_fd()
+        try:
+            probe = run_limited(
+                self.bwrap_argv(self.work_root, RuntimeSandboxNeeds("probe"), {}, seccomp_fd=filter_fd)
+                + ["--", "/bin/true"],
+                cwd=str(self.work_root),
+                env={"PATH": "/usr/bin:/bin"},
+                limits=Limits(wall_seconds=20, cpu_seconds=20),
+                cgroups=self.cgroups,
+                user=self.run_as,
+                pass_fds=(filter_fd,),
+            )
+        finally:
+            os.close(filter_fd)
         if not probe.ok:
             raise SandboxUnavailable(
-                "bubblewrap cannot create a sandbox here (user namespaces disabled?): "
+                "bubblewrap cannot create a sandbox here (user namespaces disabled, or a kernel without "
+                "seccomp filters?): "
                 + (probe.infra_error or probe.stderr.strip()[:300] or f"exit {probe.exit_code}")
             )
         try:
@@ -185,6 +193,7 @@ class BubblewrapSandbox(LocalSandbox):
             "user": "nobody" if self.run_as == NOBODY else "invoking user",
             "isolation": ("warm sandbox per worker: network, pid, IPC, UTS, cgroup and user namespaces; "
                           "read-only system; /work, /tmp and /dev/shm emptied between candidates"),
+            "syscall_filter": seccomp.describe(),
             "supervisor": "pid-1 step supervisor (harness/sandbox/step_supervisor.py) on the host's python3",
             "max_runs_per_sandbox": self.max_runs,
         }
@@ -236,13 +245,17 @@ class BubblewrapSandbox(LocalSandbox):
             if self.cgroups is not None:
                 group = self.cgroups.create(memory, processes)
             python, extra_binds = supervisor_python()
-            argv = self.bwrap_argv(folder, needs, {}, extra_binds)
-            argv += ["--as-pid-1", "--", python, "-I", "-S", "-B", "-c", AGENT_SOURCE]
-            process = self._launcher.submit(
-                subprocess.Popen, argv, cwd=str(folder), env={"PATH": "/usr/bin:/bin"}, stdin=subprocess.PIPE,
-                stdout=subprocess.PIPE, stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
-                preexec_fn=join_and_drop(group, self.run_as),
-            ).result()
+            filter_fd = seccomp.program_fd()
+            try:
+                argv = self.bwrap_argv(folder, needs, {}, extra_binds, seccomp_fd=filter_fd)
+                argv += ["--as-pid-1", "--", python, "-I", "-S", "-B", "-c", AGENT_SOURCE]
+                process = self._launcher.submit(
+                    subprocess.Popen, argv, cwd=str(folder), env={"PATH": "/usr/bin:/bin"}, stdin=subprocess.PIPE,
+                    stdout=subprocess.PIPE, stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
+                    pass_fds=(filter_fd,), preexec_fn=join_and_drop(group, self.run_as),
+                ).result()
+            finally:
+                os.close(filter_fd)  # bubblewrap has read it by the time it runs the supervisor
         except BaseException:
             if group is not None:
                 self.guarded("removing a cgroup", group.remove)
@@ -254,6 +267,7 @@ class BubblewrapSandbox(LocalSandbox):
             hello = slot.channel.call({"op": "hello"}, HELLO_SECONDS)
             if hello["pid"] != 1:
                 raise SupervisorTrouble(f"the supervisor runs as pid {hello['pid']}, not 1")
+            slot.supervisor = child_pidfd(process.pid)
         except BaseException:
             self.discard(slot)
             raise
@@ -279,20 +293,37 @@ class BubblewrapSandbox(LocalSandbox):
         return (limits.memory_mb + SUPERVISOR_MB) * 2**20, limits.max_processes + SUPERVISOR_PROCESSES
 
     def discard(self, slot: Slot) -> None:
-        """End a sandbox at once (killing bubblewrap's process takes its pid 1, and so the whole
-        pid namespace, with it); its cgroup and folder go in the background. Never raises."""
+        """End a sandbox at once; its cgroup and folder go in the background. Never raises.
+
+        The supervisor goes first: it is the sandbox's pid 1, so the kernel ends every process in
+        the sandbox with it, and bubblewrap, its parent, reaps it and exits. Killing bubblewrap
+        first would orphan the supervisor to the host's init, which may be slow to reap it (or
+        never do), and its cgroup stays busy until then."""
         slot.channel.close()
-        with contextlib.suppress(ProcessLookupError, PermissionError):
-            os.killpg(slot.process.pid, signal.SIGKILL)
+        if not signal_pidfd(slot.supervisor, signal.SIGKILL):
+            self._kill_bubblewrap(slot)
 
         def clean_up() -> None:
-            with contextlib.suppress(subprocess.TimeoutExpired):
-                slot.process.wait(timeout=30)
-            if slot.cgroup is not None:
-                self.guarded("removing a cgroup", slot.cgroup.remove)
+            try:
+                slot.process.wait(timeout=10)
+            except subprocess.TimeoutExpired:
+                self._kill_bubblewrap(slot)
+                with contextlib.suppress(subprocess.TimeoutExpired):
+                    slot.process.wait(timeout=30)
+            if slot.supervisor is not None:
+                with contextlib.suppress(OSError):
+                    os.close(slot.supervisor)
+            if slot.cgroup is not None and not slot.cgroup.remove(wait_seconds=30):
+                self.note(f"could not remove the cgroup {', '.join(map(str, slot.cgroup.dirs))}: still busy")
+                LOG.warning("assay: bubblewrap sandbox: cgroup %s left behind (still busy)", slot.cgroup.dirs[0])
             self.note(remove_folder(slot.folder))  # however deep a tree the candidate left
 
-        self.background(clean_up)
+        self.background(lambda: self.guarded("cleaning up after a sandbox", clean_up))
+
+    @staticmethod
+    def _kill_bubblewrap(slot: Slot) -> None:
+        with contextlib.suppress(ProcessLookupError, PermissionError):
+            os.killpg(slot.process.pid, signal.SIGKILL)
 
     def background(self, job) -> None:
         try:
@@ -302,9 +333,10 @@ class BubblewrapSandbox(LocalSandbox):
 
     # -- the bubblewrap command --
     def bwrap_argv(self, work: Path, needs: RuntimeSandboxNeeds, env: dict[str, str],
-                   extra_binds: tuple[str, ...] = ()) -> list[str]:
+                   extra_binds: tuple[str, ...] = (), *, seccomp_fd: int) -> list[str]:
         argv = [
             self.bwrap,
+            "--seccomp", str(seccomp_fd),  # harness/sandbox/seccomp.py: keyring, namespaces, mounts...
             "--unshare-all",  # network, pid, ipc, uts, cgroup, user namespaces
             "--die-with-parent",  # and with bubblewrap's own process, everything in the sandbox
             "--new-session",
@@ -330,6 +362,52 @@ class BubblewrapSandbox(LocalSandbox):
         for key, value in candidate_env(needs, env, home=WORK_DIR, tmp="/tmp").items():
             argv += ["--setenv", key, value]
         return argv
+
+
+def child_pidfd(parent: int) -> int | None:
+    """A pidfd for the one child of bubblewrap's process ``parent`` (the supervisor), or None
+    where it cannot be had (no pidfds before Linux 5.3). A pidfd, unlike a pid, can never
+    name another process that took the number over."""
+    for pid in _children(parent):
+        try:
+            fd = os.pidfd_open(pid)
+        except (AttributeError, OSError):
+            continue
+        if _parent_of(pid) == parent:  # still that child once the pidfd holds it
+            return fd
+        os.close(fd)
+    return None
+
+
+def signal_pidfd(fd: int | None, sig: int) -> bool:
+    """Send ``sig`` through a pidfd; False when there is none or it cannot be used."""
+    if fd is None:
+        return False
+    try:
+        signal.pidfd_send_signal(fd, sig)
+    except ProcessLookupError:
+        return True  # already gone
+    except (AttributeError, OSError):
+        return False
+    return True
+
+
+def _children(parent: int) -> list[int]:
+    try:
+        return [int(pid) for task in os.listdir(f"/proc/{parent}/task")
+                for pid in Path(f"/proc/{parent}/task/{task}/children").read_text().split()]
+    except OSError:  # a kernel without /proc/PID/task/TID/children: every process's parent
+        return [int(name) for name in os.listdir("/proc") if name.isdigit() and _parent_of(int(name)) == parent]
+
+
+def _parent_of(pid: int) -> int | None:
+    try:
+        for line in Path(f"/proc/{pid}/status").read_text().splitlines():
+            if line.startswith("PPid:"):
+                return int(line.split()[1])
+    except (OSError, ValueError, IndexError):
+        pass
+    return None
 
 
 def supervisor_python() -> tuple[str, tuple[str, ...]]:

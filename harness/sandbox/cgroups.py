@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import os
 import signal
+import time
 import uuid
 from dataclasses import dataclass
 from pathlib import Path
@@ -109,17 +110,30 @@ class Cgroup:
                 except ProcessLookupError:
                     pass
 
-    def remove(self) -> None:
+    def remove(self, wait_seconds: float = 0.0) -> bool:
+        """Kill what is left in the group and remove its directories; True once they are gone.
+        A directory stays busy while a killed process has not finished exiting: a background
+        clean-up can afford to wait ``wait_seconds`` for that, killing again meanwhile."""
         self.kill_all()
+        deadline = time.monotonic() + wait_seconds
         for directory in self.dirs:
-            for _ in range(100):
+            attempt = 0
+            while True:
                 try:
                     directory.rmdir()
                     break
                 except FileNotFoundError:
                     break
                 except OSError:
-                    os.sched_yield()
+                    attempt += 1
+                    if attempt < 100:
+                        os.sched_yield()
+                    elif time.monotonic() < deadline:
+                        self.kill_all()
+                        time.sleep(0.02)
+                    else:
+                        break
+        return not any(directory.exists() for directory in self.dirs)
 
 
 class CgroupFactory:

@@ -29,6 +29,7 @@ import atexit
 import base64
 import concurrent.futures as futures
 import contextlib
+import logging
 import os
 import socket
 import struct
@@ -59,6 +60,7 @@ from .supervised import (
     run_request,
 )
 
+LOG = logging.getLogger("assay.sandbox")
 WORK_DIR = "/work"
 RUNNER = "10001:10001"
 LABEL_OWNER = "assay.owner"
@@ -355,6 +357,8 @@ class DockerSandbox(ClosingSandbox):
         }
 
     def close(self) -> None:
+        """Never raises: containers that cannot be removed now are logged (orphans are removed
+        by the next start)."""
         with self._lock:
             if self.closed:
                 return
@@ -368,8 +372,11 @@ class DockerSandbox(ClosingSandbox):
                 future.result(timeout=HELLO_SECONDS)
         self._executor.shutdown(wait=True)
         if self.client is not None:
-            with contextlib.suppress(Exception):
+            try:
                 self.retry(lambda: remove_containers(self.client, run_id=self.run_id), "remove containers")
+            except Exception as exc:  # noqa: BLE001 - close never stops a run; the next start removes them
+                LOG.warning("assay: docker sandbox: could not remove this run's containers (%s); the next run, "
+                            "or 'assay sandbox clean', removes them", brief(exc))
         with contextlib.suppress(Exception):
             atexit.unregister(self.close)
 

@@ -30,6 +30,7 @@ def run_limited(
     memory_rlimit: bool = True,
     status_fd_placeholder: str | None = None,
     exit_codes_encode_signals: bool = False,
+    pass_fds: tuple[int, ...] = (),
 ) -> StepResult:
     """Run ``argv`` to completion or until a limit is hit, and say which limit ended it.
 
@@ -37,7 +38,8 @@ def run_limited(
     pipe the wrapper (bubblewrap) reports its own status on; the text lands in
     ``extra["wrapper_status"]``, so a wrapper failure is told apart from the candidate's.
     With ``exit_codes_encode_signals``, an exit status above 128 means death by signal
-    (status - 128), as wrappers such as bubblewrap report it.
+    (status - 128), as wrappers such as bubblewrap report it. ``pass_fds``: descriptors the
+    child keeps (bubblewrap's seccomp program).
     """
     group: Cgroup | None = None
     memory_bytes = limits.memory_mb * 1024 * 1024
@@ -63,7 +65,7 @@ def run_limited(
             start_new_session=True,
             preexec_fn=preexec,
             close_fds=True,
-            pass_fds=(status_write,) if status_write is not None else (),
+            pass_fds=tuple(pass_fds) + ((status_write,) if status_write is not None else ()),
         )
     except OSError as exc:
         if group:

@@ -1,4 +1,4 @@
     # The strings are character strings, so length and substr work on code points.
-    return undef unless length $a == length $b;
-    return scalar grep { substr($a, $_, 1) ne substr($b, $_, 1) } 0 .. length($a) - 1;
+    return undef unless length $a_ == length $b_;
+    return scalar grep { substr($a_, $_, 1) ne substr($b_, $_, 1) } 0 .. length($a_) - 1;
 }

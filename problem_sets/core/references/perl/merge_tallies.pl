@@ -1,4 +1,4 @@
-    my %merged = %$a;
-    $merged{$_} += $b->{$_} for keys %$b;
+    my %merged = %$a_;
+    $merged{$_} += $b_->{$_} for keys %$b_;
     return \%merged;
 }

@@ -1,6 +1,6 @@
     # Levenshtein distance over characters, one row at a time.
-    my @source = split //, $a;
-    my @target = split //, $b;
+    my @source = split //, $a_;
+    my @target = split //, $b_;
     my @previous = (0 .. @target);
     for my $i (0 .. $#source) {
         my @current = ($i + 1);

@@ -1,0 +1,4 @@
+    var both = new HashSet<string>(first);
+    both.IntersectWith(second);
+    return both;
+}

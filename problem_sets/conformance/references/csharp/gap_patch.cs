@@ -1,0 +1,2 @@
+    return readings.Select(reading => double.IsNaN(reading) ? fill : reading).ToList();
+}

@@ -1,0 +1,7 @@
+    BigInteger product = BigInteger.One;
+    foreach (BigInteger serial in serials)
+    {
+        product *= serial;
+    }
+    return product;
+}

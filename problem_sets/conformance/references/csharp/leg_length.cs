@@ -1,0 +1,2 @@
+    return @in.Contains(type) ? end - from : @default;
+}

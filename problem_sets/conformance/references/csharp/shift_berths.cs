@@ -1,0 +1,7 @@
+    var shifted = new Dictionary<long, string>();
+    foreach (KeyValuePair<long, string> entry in owners)
+    {
+        shifted[entry.Key + offset] = entry.Value;
+    }
+    return shifted;
+}

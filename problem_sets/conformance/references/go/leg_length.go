@@ -1,0 +1,7 @@
+for _, text := range in {
+	if text == type_ {
+		return end - from
+	}
+}
+return default_
+}

@@ -1,0 +1,6 @@
+shifted := make(map[int64]string, len(owners))
+for berth, vessel := range owners {
+	shifted[berth+offset] = vessel
+}
+return shifted
+}

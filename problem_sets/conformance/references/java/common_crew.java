@@ -1,0 +1,4 @@
+    Set<String> both = new HashSet<>(first);
+    both.retainAll(second);
+    return both;
+}

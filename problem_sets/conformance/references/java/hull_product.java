@@ -1,0 +1,6 @@
+    BigInteger product = BigInteger.ONE;
+    for (BigInteger serial : serials) {
+        product = product.multiply(serial);
+    }
+    return product;
+}

@@ -1,0 +1,2 @@
+    return in.contains(type) ? end - from : default_;
+}

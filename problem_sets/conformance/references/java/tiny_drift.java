@@ -1,0 +1,6 @@
+    List<Double> scaled = new ArrayList<>();
+    for (double offset : offsets) {
+        scaled.add(offset * factor);
+    }
+    return scaled;
+}

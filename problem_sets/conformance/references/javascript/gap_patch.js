@@ -1,0 +1,2 @@
+return readings.map((reading) => (Number.isNaN(reading) ? fill : reading));
+}

@@ -1,0 +1,2 @@
+return offsets.map((offset) => offset * factor);
+}

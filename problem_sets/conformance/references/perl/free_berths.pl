@@ -1,0 +1,3 @@
+    my %occupied = map { $_ => 1 } @$taken;
+    return [grep { !$occupied{$_} } 1 .. $count];
+}

@@ -1,0 +1,4 @@
+    my $product = Math::BigInt->new(1);
+    $product *= $_ for @$serials;
+    return $product;
+}

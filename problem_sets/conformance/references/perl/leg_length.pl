@@ -1,0 +1,2 @@
+    return (grep { $_ eq $type } @$in) ? $end - $from : $default_;
+}

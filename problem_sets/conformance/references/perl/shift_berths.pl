@@ -1,0 +1,2 @@
+    return +{ map { ($_ + $offset) => $owners->{$_} } keys %$owners };
+}

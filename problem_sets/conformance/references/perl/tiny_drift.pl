@@ -1,0 +1,2 @@
+    return [map { $_ * $factor } @$offsets];
+}

@@ -1,0 +1,2 @@
+return array_values(array_intersect($first, $second));
+}

@@ -1,0 +1,2 @@
+return array_map(static fn (float $reading): float => is_nan($reading) ? $fill : $reading, $readings);
+}

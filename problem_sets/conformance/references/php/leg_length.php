@@ -1,0 +1,2 @@
+return in_array($type, $in, true) ? $end - $from : $default_;
+}

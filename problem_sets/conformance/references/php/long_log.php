@@ -1,0 +1,2 @@
+return [mb_strlen($entries, 'UTF-8'), array_sum($marks)];
+}

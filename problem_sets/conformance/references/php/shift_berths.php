@@ -1,0 +1,6 @@
+$shifted = [];
+foreach ($owners as $berth => $vessel) {
+    $shifted[$berth + $offset] = $vessel;
+}
+return $shifted;
+}

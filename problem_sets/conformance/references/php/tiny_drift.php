@@ -1,0 +1,2 @@
+return array_map(static fn (float $offset): float => $offset * $factor, $offsets);
+}

@@ -1,0 +1,2 @@
+(1..count).reject { |berth| taken.include?(berth) }.to_set
+end

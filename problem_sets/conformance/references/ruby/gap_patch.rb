@@ -1,0 +1,2 @@
+readings.map { |reading| reading.nan? ? fill : reading }
+end

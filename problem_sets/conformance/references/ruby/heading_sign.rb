@@ -1,0 +1,2 @@
+-heading
+end

@@ -1,0 +1,2 @@
+serials.reduce(1, :*)
+end

@@ -1,0 +1,2 @@
+in_.include?(type) ? end_ - from : default
+end

@@ -1,0 +1,2 @@
+[entries.length, marks.sum]
+end

@@ -1,0 +1,2 @@
+owners.to_h { |berth, vessel| [berth + offset, vessel] }
+end

@@ -1,0 +1,2 @@
+offsets.map { |offset| offset * factor }
+end

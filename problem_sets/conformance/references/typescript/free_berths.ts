@@ -1,0 +1,6 @@
+const free = new Set<bigint>();
+for (let berth = 1n; berth <= count; berth++) {
+  if (!taken.has(berth)) free.add(berth);
+}
+return free;
+}

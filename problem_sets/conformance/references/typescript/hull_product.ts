@@ -1,0 +1,4 @@
+let product = 1n;
+for (const serial of serials) product *= serial;
+return product;
+}

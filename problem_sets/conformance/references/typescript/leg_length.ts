@@ -1,0 +1,2 @@
+return in_.includes(type) ? end - from : default_;
+}
