@@ -1,0 +1,2 @@
+first.intersection(&second).cloned().collect()
+}

@@ -1,0 +1,2 @@
+(1..=count).filter(|berth| !taken.contains(berth)).collect()
+}

@@ -1,0 +1,2 @@
+readings.into_iter().map(|reading| if reading.is_nan() { fill } else { reading }).collect()
+}

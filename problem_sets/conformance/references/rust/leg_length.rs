@@ -1,0 +1,6 @@
+if in_.contains(&type_) {
+    end - from
+} else {
+    default
+}
+}

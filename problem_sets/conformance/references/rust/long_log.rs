@@ -1,0 +1,2 @@
+(entries.chars().count() as i64, marks.iter().sum())
+}

@@ -1,0 +1,2 @@
+owners.into_iter().map(|(berth, vessel)| (berth + offset, vessel)).collect()
+}

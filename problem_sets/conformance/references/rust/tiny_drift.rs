@@ -1,0 +1,2 @@
+offsets.iter().map(|offset| offset * factor).collect()
+}
