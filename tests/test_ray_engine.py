@@ -124,6 +124,9 @@ def test_a_ray_run_gives_the_local_verdicts_and_resumes_like_one(cluster, local_
     manifest = json.loads((out / "manifest.json").read_text())
     assert manifest["engine"]["engine"] == "ray" and manifest["engine"]["nodes"] == 2
     assert manifest["engine"]["in_flight"] == 4  # twice the cluster's two CPUs
+    # The sandbox candidates ran in is a worker's, described by the worker itself.
+    assert manifest["sandbox"]["described_by"].startswith("a worker on")
+    assert manifest["sandbox"]["backend"] == "bubblewrap"
 
     # A crash after half the rows: the rerun through Ray judges only the rest.
     executions = out / "executions.jsonl"

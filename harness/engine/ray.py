@@ -35,6 +35,7 @@ MAX_RETRIES = 5            # reruns of a task whose worker process or node died
 WINDOW_PER_CPU = 2         # tasks in flight per cluster CPU: one running, one queued
 WINDOW_REFRESH_SECONDS = 10.0
 DRAIN_SECONDS = 120.0      # after Ctrl-C, how long running candidates may take to report
+WORKER_PROBE_SECONDS = 120  # a worker's first task builds its executor (and sandbox)
 
 
 class RayEngineError(EngineError):
@@ -124,6 +125,13 @@ def worker_executor(spec: ExecutorSpec, expected: Identity) -> Executor:
     return executor
 
 
+def describe_worker_sandbox(plan: tuple[ExecutorSpec, Identity]) -> dict:
+    """A worker's own sandbox description, with the node that gave it."""
+    facts = dict(worker_executor(*plan).sandbox.describe())
+    facts["described_by"] = f"a worker on {socket.gethostname()}"
+    return facts
+
+
 def judge_on_worker(plan: tuple[ExecutorSpec, Identity], sample: Sample) -> Verdict:
     """The Ray task: judge one candidate with this worker process's executor."""
     return worker_executor(*plan).judge_sample(sample)
@@ -167,6 +175,7 @@ class RayEngine:
                 where = address or "this machine"
                 raise RayEngineError(f"cannot connect to the Ray cluster at {where}: {exc}") from None
         self.task = ray.remote(num_cpus=1, max_retries=max_retries, retry_exceptions=False)(judge_on_worker)
+        self.spec = spec
         self.plan = ray.put((spec, expected))
         self.pending: dict = {}  # ObjectRef -> Job, in submission order
         self._window, self._window_at = 0, 0.0
@@ -243,7 +252,18 @@ class RayEngine:
             address = self.address or "local"
         return {"engine": "ray", "address": address, "ray_version": self.ray.__version__,
                 "nodes": len(nodes), "cpus": int(self.ray.cluster_resources().get("CPU", 0)),
-                "in_flight": self.window(), "max_retries": self.max_retries}
+                "in_flight": self.window(), "max_retries": self.max_retries, "sandbox": self.worker_sandbox()}
+
+    def worker_sandbox(self) -> dict:
+        """The sandbox the workers judge in, as one worker describes its own: the driver's
+        sandbox never runs a candidate under this engine, so the manifest records this one."""
+        probe = self.ray.remote(num_cpus=1, max_retries=0)(describe_worker_sandbox)
+        try:
+            facts = self.ray.get(probe.remote(self.plan), timeout=WORKER_PROBE_SECONDS)
+        except Exception as exc:  # a node that cannot build the executor fails every task anyway
+            return {"name": self.spec.sandbox, "described_by": "the driver's request only",
+                    "probe_error": f"{type(exc).__name__}: {exc}"[:300]}
+        return facts
 
 
 def ray_engine_factory(address: str | None):

@@ -137,6 +137,8 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
     cache = VerdictCache(options.cache_dir)
     manifest = build_manifest(options, problems, runtimes, sandbox, executor)
     manifest["engine"] = engine.describe()
+    if "sandbox" in manifest["engine"]:  # the engine's workers judge in sandboxes of their own
+        manifest["sandbox"] = manifest["engine"].pop("sandbox")
     total = sum(count_lines(p) for p in options.dumps)
     counts = {"executed": 0, "resumed": 0, "rejected": 0, "shared": 0}
     interrupted = False
