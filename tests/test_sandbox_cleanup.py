@@ -152,7 +152,7 @@ def test_a_retired_sandbox_leaves_no_orphan_and_no_cgroup(shm_root):
     # The supervisor (the sandbox's pid 1) is ended before bubblewrap, which reaps it: killed the
     # other way round, it became a zombie of the host's init, and its cgroup, busy until init
     # reaped it (seconds here), was left behind.
-    from harness.sandbox.bubblewrap import _children
+    from harness.sandbox.supervised_local import children as _children
 
     box = open_backend("bubblewrap", shm_root)
     try:

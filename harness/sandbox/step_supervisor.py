@@ -14,6 +14,14 @@ itself non-dumpable, so a candidate can neither ptrace it nor open its /proc fil
 fds, environment). After every step it kills whatever the step left running and reports it, so
 the backend can discard the sandbox.
 
+Host mode: the bare backend (``--sandbox none``) runs the same supervisor as a plain child
+process, with no namespaces of its own, so that limits are enforced by this one file whatever
+the backend. The backend then names the work dir and private scratch folders (a JSON argument,
+see ``main``), and the supervisor must leave the host alone: it makes itself a child subreaper,
+so whatever a step leaves behind stays below it, and it kills only its own descendants and the
+members of its cgroup, never by a process id that may have been handed to another process
+since it was read (``kill_verified``).
+
 Standard library only and no harness imports: the file is sent as source into the image's
 ``python3``.
 """
@@ -32,8 +40,9 @@ import time
 
 WORK = "/work"
 SCRATCH = ("/tmp", "/dev/shm")
-KEEP_BYTES = 8192  # output kept for diagnostics (harness/sandbox/process.py uses these too)
+KEEP_BYTES = 8192  # output kept for diagnostics
 PR_SET_DUMPABLE = 4
+PR_SET_CHILD_SUBREAPER = 36  # <linux/prctl.h>
 LIBC = ctypes.CDLL(None)
 IGNORED = [s for s in (signal.SIGINT, signal.SIGTERM, signal.SIGHUP, signal.SIGQUIT, signal.SIGUSR1,
                        signal.SIGUSR2, signal.SIGALRM, signal.SIGTSTP, signal.SIGTTIN, signal.SIGTTOU)]
@@ -78,16 +87,35 @@ def memory_usage():
 
 
 class Supervisor:
-    def __init__(self):
-        self.oom_files = oom_counter_files()
+    """``host``: None as pid 1 of a sandbox's own namespaces; in host mode (see the module's
+    summary) ``{"work": folder, "scratch": [folders], "cgroup_procs": [cgroup.procs files]}``."""
+
+    def __init__(self, host=None):
+        self.host = host is not None
+        if host is None:
+            self.work, self.scratch = WORK, SCRATCH
+            self.modes = {WORK: 0o700, "/tmp": 0o1777, "/dev/shm": 0o1777}
+            self.oom_files = oom_counter_files()
+            self.sweep = sweep
+        else:
+            self.work, self.scratch = host["work"], tuple(host["scratch"])
+            self.modes = dict.fromkeys((self.work,) + self.scratch, 0o700)  # private folders
+            self.oom_files = []  # the host's counters are not this sandbox's: the backend reads its group's
+            procs_files = tuple(host.get("cgroup_procs", ()))
+            self.sweep = lambda: sweep_own(procs_files)
+            if LIBC.prctl(PR_SET_CHILD_SUBREAPER, 1, 0, 0, 0) != 0:
+                raise OSError("prctl(PR_SET_CHILD_SUBREAPER) failed: cannot become a child subreaper")
+
+    def empty(self, folders):
+        return [problem for top in folders for problem in empty_folder(top, self.modes[top])]
 
     # --- files -----------------------------------------------------------------------------
     def op_write(self, req):
-        write_new_file(WORK, req["name"], base64.b64decode(req["data"]))
+        write_new_file(self.work, req["name"], base64.b64decode(req["data"]))
         return {}
 
     def op_read(self, req):
-        data = read_regular_file(WORK, req["name"], int(req["max_bytes"]))
+        data = read_regular_file(self.work, req["name"], int(req["max_bytes"]))
         return {"data": None if data is None else base64.b64encode(data).decode("ascii")}
 
     # --- steps -----------------------------------------------------------------------------
@@ -98,18 +126,18 @@ class Supervisor:
         started = time.monotonic()
         try:
             proc = subprocess.Popen(
-                argv, cwd=WORK, env=env, stdin=subprocess.DEVNULL, stdout=subprocess.PIPE,
+                argv, cwd=self.work, env=env, stdin=subprocess.DEVNULL, stdout=subprocess.PIPE,
                 stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
                 preexec_fn=step_preexec(limits, req.get("rlimit_memory"), req.get("rlimit_processes")),
             )
         except OSError as exc:
             return {"spawn_error": "cannot start %s: %s" % (argv[0], exc)}
-        out, err, timed_out, flooded, left_running = collect(proc, limits, started)
+        out, err, timed_out, flooded, left_running = collect(proc, limits, started, self.sweep)
         wall = time.monotonic() - started
-        left_running += sweep()
+        left_running += self.sweep()
         after = read_oom_kills(self.oom_files)
         # Each step gets empty scratch areas, as bubblewrap's fresh tmpfs /tmp per step.
-        residue = [problem for top in SCRATCH for problem in empty_folder(top)]
+        residue = self.empty(self.scratch)
         return {
             "returncode": proc.returncode,
             "wall": round(wall, 4),
@@ -128,19 +156,24 @@ class Supervisor:
         """Empty the work dir and the scratch areas for the next candidate. Reports what
         could not be removed and any state a candidate could leave for the next one outside
         those folders: processes, System V IPC objects, POSIX message queues."""
-        left_running = sweep()
-        residue = [problem for top in (WORK,) + SCRATCH for problem in empty_folder(top)]
-        return {"left_running": left_running, "residue": residue[:20], "ipc": ipc_objects()[:20],
-                "memory_bytes": memory_usage()}
+        left_running = self.sweep()
+        residue = self.empty((self.work,) + self.scratch)
+        # On the host, IPC objects and memory in use are the whole machine's, not the sandbox's.
+        return {"left_running": left_running, "residue": residue[:20],
+                "ipc": [] if self.host else ipc_objects()[:20], "memory_bytes": None if self.host else memory_usage()}
 
     def op_hello(self, req):
         return {"pid": os.getpid(), "uid": os.getuid(), "oom_counter": bool(self.oom_files),
-                "python": sys.version.split()[0], "memory_bytes": memory_usage()}
+                "python": sys.version.split()[0], "memory_bytes": None if self.host else memory_usage(),
+                "host_mode": self.host}
 
 
 def step_preexec(limits, rlimit_memory, rlimit_processes):
     """Per-step rlimits. Memory and process counts are normally the sandbox's cgroup's job;
-    where there is none, the backend asks for RLIMIT_AS and RLIMIT_NPROC instead."""
+    where there is none, the backend asks for RLIMIT_DATA and RLIMIT_NPROC instead.
+    RLIMIT_DATA, not RLIMIT_AS: it counts the writable private memory a process maps (its
+    heap), not address space merely reserved, which V8, the JVM and Go reserve by the gigabyte
+    at start and never touch (under RLIMIT_AS they die before the candidate's code runs)."""
     cpu = max(1, int(float(limits["cpu_seconds"]) + 0.999))
     fsize = int(limits["max_file_mb"]) * 1024 * 1024
     memory = int(limits["memory_mb"]) * 1024 * 1024
@@ -153,7 +186,7 @@ def step_preexec(limits, rlimit_memory, rlimit_processes):
         resource.setrlimit(resource.RLIMIT_FSIZE, (fsize, fsize))
         resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
         if rlimit_memory:
-            resource.setrlimit(resource.RLIMIT_AS, (memory, memory))
+            resource.setrlimit(resource.RLIMIT_DATA, (memory, memory))
         if rlimit_processes:
             resource.setrlimit(resource.RLIMIT_NPROC, (processes, processes))
         # Dumpable again (exec would do it anyway), else /proc/self belongs to root. Then the
@@ -165,12 +198,11 @@ def step_preexec(limits, rlimit_memory, rlimit_processes):
     return preexec
 
 
-def collect(proc, limits, started):
-    """Read both pipes until EOF, the wall-clock deadline or the output cap (the same rules as
-    the local backends' harness/sandbox/process.py). When the step's own process ends, whatever
-    it started is killed, as bubblewrap's pid namespace ends with its first process: a
-    detached child holding the pipes open cannot stretch the step. Returns the output, the
-    two flags and how many processes were still running then."""
+def collect(proc, limits, started, kill_leftovers):
+    """Read both pipes until EOF, the wall-clock deadline or the output cap. When the step's
+    own process ends, whatever it started is killed (``kill_leftovers``, the supervisor's sweep), as bubblewrap's pid namespace
+    ends with its first process: a detached child holding the pipes open cannot stretch the
+    step. Returns the output, the two flags and how many processes were still running then."""
     deadline = started + float(limits["wall_seconds"])
     cap = int(limits["max_output_kb"]) * 1024
     buffers = {proc.stdout: bytearray(), proc.stderr: bytearray()}
@@ -211,18 +243,17 @@ def collect(proc, limits, started):
                 ended = True
             if ended and proc.returncode is None:
                 reap_step(proc)  # reaped first, so the sweep cannot take its exit status
-                left_running = sweep()
+                left_running = kill_leftovers()
             if exit_fd is None and ended and not any(k.data != "exit" for k in selector.get_map().values()):
                 break
     if exit_fd is not None:
         os.close(exit_fd)
     if timed_out or flooded:
-        kill_group(proc.pid)
+        kill_step_group(proc)
     if not reap_step(proc, timeout=max(1.0, deadline - time.monotonic())):
         timed_out = True
-        kill_group(proc.pid)
+        kill_step_group(proc)
         reap_step(proc)
-    kill_group(proc.pid)
     for stream in buffers:
         stream.close()
     return bytes(buffers[proc.stdout]), bytes(buffers[proc.stderr]), timed_out, flooded, left_running
@@ -257,16 +288,21 @@ def keep_tail(buffer, chunk):
         del buffer[: len(buffer) - KEEP_BYTES]
 
 
-def kill_group(pgid):
+def kill_step_group(proc):
+    """Kill the step's process group (its session: the step starts one), but only while its
+    leader is unreaped: until then no other process can hold that number, so on a host the
+    signal cannot reach another program's group. What is left afterwards is the sweep's."""
+    if proc.returncode is not None:
+        return
     try:
-        os.killpg(pgid, signal.SIGKILL)
+        os.killpg(proc.pid, signal.SIGKILL)
     except (ProcessLookupError, PermissionError):
         pass
 
 
 def sweep():
-    """Kill and reap every process but this one; return how many were still running (zombies,
-    finished but not yet reaped, do not count)."""
+    """As pid 1 of the sandbox's pid namespace: kill and reap every process but this one;
+    return how many were still running (zombies, finished but not yet reaped, do not count)."""
     me = os.getpid()
     running = None
     for _ in range(200):
@@ -283,6 +319,117 @@ def sweep():
             break
         time.sleep(0.005)
     return running or 0
+
+
+def sweep_own(procs_files):
+    """In host mode: kill and reap this supervisor's descendants and the members of its cgroup
+    (``procs_files``), and nothing else; return how many were still running. As a child
+    subreaper it inherits every orphan below it, so a process that detached from its parent
+    is still found through the parent links."""
+    me = os.getpid()
+    running = None
+    for _ in range(200):
+        pids = own_processes(me, procs_files)
+        if running is None:
+            running = sum(1 for pid in pids if process_state(pid) not in ("Z", "X", None))
+        if pids:
+            kill_verified(pids, lambda: own_processes(me, procs_files))
+        reap()
+        if not pids:
+            break
+        time.sleep(0.005)
+    return running or 0
+
+
+def own_processes(root, procs_files=()):
+    """The process ids below ``root`` (its descendants) and in the cgroups whose
+    ``cgroup.procs`` files are given, ``root`` itself excepted."""
+    found = descendants(root)
+    for name in procs_files:
+        try:
+            found.update(int(p) for p in open(name).read().split())
+        except (OSError, ValueError):
+            continue
+    found.discard(root)
+    return found
+
+
+def descendants(root):
+    """Every process below ``root``, through the kernel's per-thread children lists, or through
+    every process's parent link where the kernel keeps no such lists."""
+    if not os.path.exists("/proc/%d/task/%d/children" % (os.getpid(), os.getpid())):
+        return descendants_by_parent_links(root)
+    found, queue = set(), [root]
+    while queue:
+        pid = queue.pop()
+        try:
+            tasks = os.listdir("/proc/%d/task" % pid)
+        except OSError:
+            continue  # gone meanwhile: its children are ours (the subreaper's) by the next pass
+        for task in tasks:
+            try:
+                kids = open("/proc/%d/task/%s/children" % (pid, task)).read().split()
+            except OSError:
+                continue
+            for kid in map(int, kids):
+                if kid not in found and kid != root:
+                    found.add(kid)
+                    queue.append(kid)
+    return found
+
+
+def descendants_by_parent_links(root):
+    parents = {}
+    for name in os.listdir("/proc"):
+        if name.isdigit():
+            parent = parent_of(int(name))
+            if parent is not None:
+                parents.setdefault(parent, []).append(int(name))
+    found, queue = set(), [root]
+    while queue:
+        for kid in parents.get(queue.pop(), ()):
+            if kid not in found and kid != root:
+                found.add(kid)
+                queue.append(kid)
+    return found
+
+
+def parent_of(pid):
+    try:
+        text = open("/proc/%d/stat" % pid).read()
+    except OSError:
+        return None
+    try:
+        return int(text[text.rfind(")") + 2:].split()[1])
+    except (IndexError, ValueError):
+        return None
+
+
+def kill_verified(pids, still_own):
+    """SIGKILL the processes ``pids``, each through a pidfd opened first and used only if its
+    number still belongs to one of ours afterwards (``still_own()``): a pidfd names the process
+    it was opened on for good, so one that ended meanwhile, its number reused by a stranger, is
+    signalled in vain instead of the stranger. Without pidfds (Linux before 5.3, Python before
+    3.9) by number, after checking again."""
+    handles = {}
+    for pid in pids:
+        try:
+            handles[pid] = os.pidfd_open(pid)
+        except (AttributeError, OSError):
+            handles[pid] = None
+    current = still_own()
+    for pid, handle in handles.items():
+        try:
+            if pid in current:
+                if handle is not None and hasattr(signal, "pidfd_send_signal"):
+                    signal.pidfd_send_signal(handle, signal.SIGKILL)
+                else:
+                    os.kill(pid, signal.SIGKILL)
+        except (ProcessLookupError, PermissionError, OSError):
+            pass
+        finally:
+            if handle is not None:
+                os.close(handle)
 
 
 def process_state(pid):
@@ -303,11 +450,12 @@ def reap():
             return
 
 
-def empty_folder(top):
-    """Remove everything inside ``top``; what could not be removed, as messages."""
+def empty_folder(top, mode):
+    """Remove everything inside ``top`` and give it back ``mode``; what could not be removed,
+    as messages."""
     try:
         if os.lstat(top).st_uid == os.getuid():
-            os.chmod(top, 0o700 if top == WORK else 0o1777)
+            os.chmod(top, mode)
         names = os.listdir(top)
     except OSError as exc:
         return ["%s: %s" % (top, exc)]
@@ -526,10 +674,12 @@ def make_writable(fd):
 
 
 def main():
+    """Serve requests until stdin closes. An argument, when given, is the host mode's JSON
+    (see ``Supervisor``)."""
     LIBC.prctl(PR_SET_DUMPABLE, 0, 0, 0, 0)
     for sig in IGNORED:
         signal.signal(sig, signal.SIG_IGN)
-    supervisor = Supervisor()
+    supervisor = Supervisor(json.loads(sys.argv[1]) if len(sys.argv) > 1 else None)
     out = sys.stdout.buffer
     handlers = {"hello": supervisor.op_hello, "write": supervisor.op_write, "read": supervisor.op_read,
                 "run": supervisor.op_run, "reset": supervisor.op_reset}
@@ -543,10 +693,15 @@ def main():
         except Exception as exc:  # reported to the backend, which treats it as a sandbox failure
             reply = {"ok": False, "error": "%s: %s" % (type(exc).__name__, exc)}
         reply["seq"] = seq
-        out.write(json.dumps(reply).encode("ascii") + b"\n")
-        out.flush()
+        try:
+            out.write(json.dumps(reply).encode("ascii") + b"\n")
+            out.flush()
+        except OSError:  # nobody reads the replies: the harness is gone
+            break
         reap()
-    # stdin closed: the harness is gone; exiting ends the sandbox.
+    # The harness is gone. In a sandbox, exiting as its pid 1 ends everything in it; on the host
+    # the supervisor's descendants would outlive it, so they go first.
+    supervisor.sweep()
 
 
 if __name__ == "__main__":

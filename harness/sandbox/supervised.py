@@ -2,9 +2,9 @@
 (``step_supervisor.py``), the pool that checks sandboxes out one candidate at a time, and the
 reading of the supervisor's replies into step results and reasons to discard a sandbox.
 
-The Docker backend keeps containers warm this way, and bubblewrap keeps one long-lived sandbox
-per worker; each supplies how a sandbox starts, how its channel carries bytes, and how it is
-thrown away. The rules for when a sandbox may serve the next candidate live here, once.
+The Docker backend keeps containers warm this way, and bubblewrap and the bare backend keep one
+long-lived supervisor per worker (``supervised_local.py``); each supplies how a sandbox starts,
+how its channel carries bytes, and how it is thrown away. The rules for when a sandbox may serve the next candidate live here, once.
 """
 
 from __future__ import annotations
@@ -293,7 +293,7 @@ def read_run_reply(reply: dict, limits: Limits) -> tuple[StepResult, str | None]
         timed_out=reply["timed_out"],
         output_exceeded=reply["flooded"],
     )
-    # The same readings as harness/sandbox/process.py makes of a local child.
+    # Limits the kernel enforces by signal: the hard CPU rlimit (SIGXCPU, then SIGKILL past it), file size.
     if code == -signal.SIGXCPU or (code == -signal.SIGKILL and reply["wall"] >= limits.cpu_seconds):
         result.timed_out = True
     if code == -signal.SIGXFSZ:
