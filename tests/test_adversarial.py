@@ -62,16 +62,7 @@ cases:
 
 # Attacks that currently get through, by (runtime, attack name) and backend: each is marked as
 # an expected failure (strict, so the mark must go once the sandbox stops it).
-KEYRING_ESCAPE = ("no seccomp filter under bubblewrap: add_key succeeds and the key stays in the warm "
-                  "sandbox's user keyring, where the next candidate sees it")
-KNOWN_ESCAPES: dict[tuple[str, str], dict[str, str]] = {
-    ("ruby", "adds a key named after the tag to its user keyring (add_key through Fiddle)"):
-        {"bubblewrap": KEYRING_ESCAPE},
-    ("perl", "adds a key named after the tag to its user keyring (add_key through syscall())"):
-        {"bubblewrap": KEYRING_ESCAPE},
-    ("php", "adds a key named after the tag to its user keyring, through a child php that loads FFI itself"):
-        {"bubblewrap": KEYRING_ESCAPE},
-}
+KNOWN_ESCAPES: dict[tuple[str, str], dict[str, str]] = {}
 
 
 def corpus_entries():
