@@ -38,7 +38,8 @@ MIN_CANDIDATES = 500
 def workload(count: int) -> list[Sample]:
     problems = load_problem_set("conformance")
     runtime = load_runtime("python")
-    references = [(p.id, runtime.reference_completion(p)) for p in problems.problems.values() if "python" in p.reference]
+    references = [(p.id, runtime.reference_completion(p)) for p in problems.problems.values()
+                  if runtime.reference(p) is not None]
     return [Sample(pid, "python", i, completion, "benchmark", i)
             for i, (pid, completion) in enumerate(references[i % len(references)] for i in range(count))]
 

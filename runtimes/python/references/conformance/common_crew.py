@@ -1,0 +1,1 @@
+return set(first) & set(second)

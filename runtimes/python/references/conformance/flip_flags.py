@@ -1,0 +1,1 @@
+return [not flag for flag in flags]

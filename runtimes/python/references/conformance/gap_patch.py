@@ -1,0 +1,1 @@
+return [fill if reading != reading else reading for reading in readings]

@@ -1,0 +1,4 @@
+product = 1
+for serial in serials:
+    product *= serial
+return product

@@ -1,0 +1,2 @@
+name, enabled = entry
+return name + (":on" if enabled else ":off") + (suffix if suffix is not None else "")

@@ -1,0 +1,1 @@
+return end - from_ if type in in_ else default

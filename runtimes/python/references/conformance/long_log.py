@@ -1,0 +1,1 @@
+return (len(entries), sum(marks))

@@ -1,0 +1,1 @@
+return sum(readings) / len(readings) if readings else 0.0

@@ -1,0 +1,1 @@
+return {berth + offset: vessel for berth, vessel in owners.items()}

@@ -1,0 +1,1 @@
+return (min(values), max(values)) if values else None

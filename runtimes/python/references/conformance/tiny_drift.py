@@ -1,0 +1,1 @@
+return [offset * factor for offset in offsets]

@@ -1,0 +1,1 @@
+return float(sum(sum(items.values()) for items in crates.values()))

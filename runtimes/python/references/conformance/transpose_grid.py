@@ -1,0 +1,1 @@
+return [list(column) for column in zip(*grid)]

@@ -1,0 +1,1 @@
+return {word: len(word) for word in words}
