@@ -154,3 +154,57 @@ def test_a_runtime_made_outside_the_project_checks_scores_and_builds_there(tmp_p
                 client.api.remove_image(name)
     assert_nothing_added_to_the_project(before)
 
+
+# --- the class Java and C# wrap the function in ----------------------------------------------
+
+# A problem whose function is named like the wrapper class. C# forbids a member named like its
+# enclosing type (ECMA-334, "Class members": CS0542), so its method must be renamed; Java
+# allows a method named like its class (JLS 17, 8.4), and camelCase keeps it `harbour` anyway.
+HARBOUR_SET = {"harbour.yaml": """\
+    id: harbour
+    title: Free berths in the harbour
+    difficulty: easy
+    tags: [math]
+    description: Return how many of the harbour's `berths` are free when `moored` are taken.
+    signature:
+      name: harbour
+      params: [{name: berths, type: int}, {name: moored, type: int}]
+      returns: int
+    cases:
+      - {args: [12, 5], expected: 7, example: true}
+      - {args: [3, 3], expected: 0}
+      - {args: [40, 0], expected: 40}
+    """}
+# The method body and its closing brace, as the set's references/<language>/ files hold them.
+HARBOUR_REFERENCE = "    return berths - moored;\n}\n"
+
+
+@pytest.mark.parametrize("name,opening", [("java", "\nclass Harbour {\n"),
+                                          ("csharp", "\npublic static class Harbour\n{\n")])
+def test_java_and_csharp_wrap_every_function_in_a_class_named_harbour(name, opening):
+    from harness.problems import load_problem_set
+
+    runtime = load_runtime(name)
+    for problem in load_problem_set("conformance").problems.values():
+        prompt = runtime.render_prompt(problem)
+        assert opening in prompt and "Solution" not in prompt, (name, problem.id)
+
+
+def test_a_function_named_like_the_class_is_renamed_where_the_language_needs_it(tmp_path):
+    from harness.problems import load_problem_set
+
+    from .conftest import write_set
+
+    folder = write_set(tmp_path / "harbour_set", HARBOUR_SET)
+    for name, extension in (("java", "java"), ("csharp", "cs")):
+        (folder / "references" / name).mkdir(parents=True)
+        (folder / "references" / name / f"harbour.{extension}").write_text(HARBOUR_REFERENCE, encoding="utf-8")
+    problem = load_problem_set(str(folder)).problems["harbour"]
+    assert "public static long Harbour_(long berths, long moored)" in load_runtime("csharp").render_prompt(problem)
+    assert "public static long harbour(long berths, long moored) {" in load_runtime("java").render_prompt(problem)
+    languages = [n for n in ("java", "csharp") if load_runtime(n).toolchain_version() is not None]
+    if not languages:
+        pytest.skip("neither javac nor mcs is installed here (bash .ci/install installs them)")
+    done = assay("problems", "check", folder, "--json", "-j", "2", *[a for n in languages for a in ("--lang", n)])
+    report = json.loads(done.stdout)
+    assert [(r["language"], r["outcome"]) for r in report["results"]] == [(n, "passed") for n in sorted(languages)]
