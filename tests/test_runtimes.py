@@ -99,8 +99,11 @@ def test_prompts_for_every_language_are_exactly_what_scoring_continues(tmp_path)
     assert subprocess.run(args, capture_output=True).returncode == 0
     rows = [json.loads(line) for line in prompts.read_text(encoding="utf-8").splitlines()]
     conformance = load_problem_set(CONFORMANCE_SET)
-    assert len(rows) == len(BUNDLED) * len(conformance)
     runtimes = {name: load_runtime(name) for name in BUNDLED}
+    # Every problem a runtime can pose, and none it refuses (a type it has no counterpart for).
+    posed = {(p.id, name) for name, r in runtimes.items() for p in conformance.problems.values() if not r.refusal(p)}
+    assert {(row["problem"], row["language"]) for row in rows} == posed and len(rows) == len(posed)
+    assert len(posed) < len(BUNDLED) * len(conformance)  # bigint is refused somewhere
     executor = Executor(None, conformance, runtimes)
     for row in rows:
         runtime = runtimes[row["language"]]
