@@ -68,7 +68,7 @@ class BubblewrapSandbox(SupervisedLocalSandbox):
             self.discard(self.start_slot(RuntimeSandboxNeeds("probe")))
         except (SupervisorTrouble, OSError) as exc:
             raise SandboxUnavailable(
-                "bubblewrap cannot start its step supervisor, which needs a python3 (3.8 or later) under "
+                "bubblewrap cannot start its step supervisor, which needs a python3 (3.9 or later) under "
                 f"/usr, or a Python the sandbox user can read: {brief(exc)}"
             ) from None
 
@@ -183,7 +183,7 @@ def child_pidfd(parent: int) -> int | None:
 
 def supervisor_python() -> tuple[str, tuple[str, ...]]:
     """The interpreter the supervisor runs on inside the sandbox (standard library only, any
-    Python 3.8 or later), and any folder that must be bound for it: the system's python3 under
+    Python 3.9 or later: os.waitstatus_to_exitcode), and any folder that must be bound for it: the system's python3 under
     /usr when there is one (the sandbox sees /usr anyway), else the harness's own Python."""
     system = shutil.which("python3", path=BASE_PATH)
     if system and system.startswith("/usr/"):
