@@ -183,8 +183,9 @@ def child_pidfd(parent: int) -> int | None:
 
 def supervisor_python() -> tuple[str, tuple[str, ...]]:
     """The interpreter the supervisor runs on inside the sandbox (standard library only, any
-    Python 3.9 or later: os.waitstatus_to_exitcode), and any folder that must be bound for it: the system's python3 under
-    /usr when there is one (the sandbox sees /usr anyway), else the harness's own Python."""
+    Python 3.9 or later, for os.waitstatus_to_exitcode), and any folder that must be bound for
+    it: the system's python3 under /usr when there is one (the sandbox sees /usr anyway), else
+    the harness's own Python."""
     system = shutil.which("python3", path=BASE_PATH)
     if system and system.startswith("/usr/"):
         return system, ()
