@@ -61,3 +61,22 @@ def test_a_sidecar_reference_for_an_unknown_problem_is_an_error(tiny_set):
     (tiny_set / "references" / "lua" / "nope.lua").write_text("end\n")
     with pytest.raises(ProblemError, match="nope.lua"):
         load_problem_set(str(tiny_set))
+
+
+def test_references_a_runtime_carries_count_for_listing_and_checking():
+    import json
+    import subprocess
+    import sys
+
+    from harness.cli.problems import reference_languages
+    from harness.runtimes import available_runtimes, load_runtime
+
+    conformance = load_problem_set("conformance")
+    runtimes = {name: load_runtime(name) for name in available_runtimes()}
+    # The conformance set holds no reference itself: every one lives in its runtime's folder.
+    assert not any(p.reference for p in conformance.problems.values())
+    assert reference_languages(conformance, runtimes) == set(runtimes)
+    listed = subprocess.run([sys.executable, "-m", "harness", "problems", "list", "conformance", "--json"],
+                            capture_output=True, text=True, check=True)
+    rows = {row["id"]: row for row in json.loads(listed.stdout)}
+    assert set(rows["pass_int"]["languages"]) == set(runtimes)

@@ -29,10 +29,12 @@ def problems_check(
     from ..engine.checks import check_references, problem_warnings
 
     problem_set = load_set(set_name)
-    languages = lang or sorted({l for p in problem_set.problems.values() for l in p.reference}
-                               & set(available_runtimes(runtimes_dir)))
-    runtimes = load_runtimes(languages, runtimes_dir)
-    warnings = problem_warnings(problem_set, load_runtimes(available_runtimes(runtimes_dir), runtimes_dir))
+    every = load_runtimes(available_runtimes(runtimes_dir), runtimes_dir)
+    if lang:
+        runtimes = load_runtimes(lang, runtimes_dir)
+    else:  # references live in the set or in the runtimes' own folders
+        runtimes = {name: r for name, r in every.items() if reference_languages(problem_set, {name: r})}
+    warnings = problem_warnings(problem_set, every)
     with open_sandbox(sandbox) as box:
         results = check_references(problem_set, runtimes, box, jobs)
     failures = [r for r in results if r["outcome"] not in ("passed", "unsupported")]
@@ -53,15 +55,24 @@ def problems_check(
         raise typer.Exit(1)
 
 
+def reference_languages(problem_set, runtimes: dict) -> set[str]:
+    """The runtimes that hold a reference for at least one of the set's problems."""
+    return {name for name, r in runtimes.items() if any(r.reference(p) is not None
+                                                         for p in problem_set.problems.values())}
+
+
 @problems_app.command("list")
 def problems_list(
     set_name: str = typer.Argument("core"),
+    runtimes_dir: Optional[List[Path]] = RuntimesDir,
     as_json: bool = typer.Option(False, "--json"),
 ) -> None:
-    """List a set's problems with difficulty, tags and case counts."""
+    """List a set's problems with difficulty, tags, case counts and the languages with references."""
     problem_set = load_set(set_name)
+    runtimes = load_runtimes(available_runtimes(runtimes_dir), runtimes_dir)
     rows = [{"id": p.id, "difficulty": p.difficulty, "tags": list(p.tags), "cases": len(p.cases),
-             "languages": sorted(p.reference)} for p in problem_set.problems.values()]
+             "languages": sorted(name for name, r in runtimes.items() if r.reference(p) is not None)}
+            for p in problem_set.problems.values()]
     if as_json:
         typer.echo(json.dumps(rows, indent=2))
         return
