@@ -22,7 +22,7 @@ from harness.vocabulary import Sample
 from harness.engine.execution import Executor
 from harness.problems import load_problem_set
 from harness.runtimes import indent_lines, load_runtime
-from harness.sandbox import make_sandbox
+from harness.sandbox import images, make_sandbox
 from tests.conftest import ADD_PAIR, write_set
 
 CORPUS_DIR = Path(__file__).parent / "adversarial"
@@ -161,6 +161,10 @@ def test_hostile_candidate_is_contained(language, control, attack, backend, host
     runtime = load_runtime(language)
     if runtime.toolchain_version() is None and not os.environ.get("CI"):
         pytest.skip(f"{language} toolchain not installed here")
+    if backend.name == "docker":
+        tag = images.image_tag(runtime.needs)
+        if images.find_image(backend.client, tag) is None:
+            pytest.skip(f"no Docker image {tag} for these {language} runtime files: assay runtimes build {language}")
     known = KNOWN_ESCAPES.get((language, attack["name"]), {}).get(backend.name)
     if known:
         request.node.add_marker(pytest.mark.xfail(reason=known, strict=True))
