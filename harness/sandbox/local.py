@@ -3,7 +3,6 @@
 
 from __future__ import annotations
 
-import contextlib
 import logging
 import os
 import tempfile
@@ -37,7 +36,8 @@ def private_folder(root: Path, owner: int | None, prefix: str = "cand-") -> Path
 
 
 class LocalWorkspace:
-    """A host folder for one candidate; subclasses decide how a step is wrapped."""
+    """A candidate's work dir as a host folder, written and read from the host; subclasses
+    decide how a step runs."""
 
     def __init__(self, path: Path, owner: int | None):
         self.path = path
@@ -52,10 +52,6 @@ class LocalWorkspace:
     def read(self, name: str, max_bytes: int) -> bytes | None:
         # No link followed, on the way or at the end; a FIFO in its place reads as missing.
         return read_regular_file(str(self.path), name, max_bytes)
-
-    def remove(self) -> str | None:
-        """Remove the folder; what went wrong, if anything, as a message (logged too)."""
-        return remove_folder(self.path)
 
 
 def remove_folder(path: Path) -> str | None:
@@ -80,22 +76,13 @@ def candidate_env(needs: RuntimeSandboxNeeds, env: dict[str, str], home: str, tm
 
 
 class LocalSandbox(ClosingSandbox):
-    """Owns one work root; subclasses set ``workspace_class`` and their checks."""
-
-    workspace_class: type
+    """Owns one work root, where its sandboxes' folders are made, and the record of folders
+    that could not be removed."""
 
     def __init__(self, work_root: Path | None, prefix: str):
         # One folder per sandbox object, so two sandboxes in one process never share it.
         self.work_root = Path(tempfile.mkdtemp(prefix=prefix, dir=work_root or default_work_root()))
         self.cleanup_problems: list[str] = []  # folders that could not be removed, for the record
-
-    @contextlib.contextmanager
-    def workspace(self, needs: RuntimeSandboxNeeds):
-        space = self.workspace_class(self, needs)
-        try:
-            yield space
-        finally:
-            self.note(space.remove())
 
     def note(self, problem: str | None) -> None:
         if problem:
