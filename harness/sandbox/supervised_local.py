@@ -182,7 +182,8 @@ class SupervisedLocalSandbox(LocalSandbox):
             return (f"{self.cgroups.describe()}: each step's limit plus {SUPERVISOR_MB} MB for the supervisor, "
                     "memory kills counted")
         return ("rlimits per step (RLIMIT_DATA for memory, RLIMIT_NPROC for processes): no cgroup is "
-                "writable here; a memory limit is seen only through the runtime's out-of-memory message")
+                "writable here; a step over its memory limit fails to allocate rather than being killed, so "
+                "memory_limit is judged from the runtime's out-of-memory message")
 
     def warm(self, needs: RuntimeSandboxNeeds, count: int) -> None:
         """Start ``count`` sandboxes for a runtime ahead of its first candidates."""
