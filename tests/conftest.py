@@ -14,6 +14,20 @@ from harness.sandbox import make_sandbox
 
 ROOT = Path(__file__).resolve().parents[1]
 
+# Modules that run many sandboxed candidates, images or clusters: `-m "not slow"` leaves them out
+# for a contributor's quick run (under two minutes on 2 cores); CI runs everything.
+SLOW_MODULES = {
+    "test_adversarial", "test_docker_sandbox", "test_ray_engine", "test_runtimes", "test_demo",
+    "test_sandbox_isolation", "test_sandbox_cleanup", "test_sandbox_planted_links", "test_seccomp_filter",
+    "test_sandbox_none_host_mode", "test_sandbox_soak", "test_runtime_folders",
+}
+
+
+def pytest_collection_modifyitems(items):
+    for item in items:
+        if item.module.__name__.rsplit(".", 1)[-1] in SLOW_MODULES:
+            item.add_marker(pytest.mark.slow)
+
 
 @pytest.fixture(scope="session")
 def sandbox():

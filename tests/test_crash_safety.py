@@ -54,6 +54,7 @@ def test_a_full_output_disk_stops_the_run_cleanly_and_the_rerun_completes_it(tmp
     assert not any(r["outcome"] == "infra_error" for r in rows)
 
 
+@pytest.mark.slow
 def test_ctrl_c_stops_cleanly_and_says_how_to_resume(tmp_path, tiny_set):
     slow = {"problem": "add_pair", "language": "python",
             "completion": "    import time\n    time.sleep(0.3)\n    return a + b\n"}

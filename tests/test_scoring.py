@@ -75,6 +75,7 @@ def test_malformed_lines_go_to_rejects_and_the_rest_is_scored(tmp_path, tiny_set
     assert [r["outcome"] for r in read_rows(out)] == ["passed", "passed"]
 
 
+@pytest.mark.slow
 def test_a_killed_run_resumed_gives_the_same_verdicts_without_loss_or_duplicates(tmp_path, tiny_set):
     # Distinct programs (an indented comment each), so verdicts arrive one by one rather than in
     # bursts of shared rows, and the kill lands part-way.
@@ -175,6 +176,7 @@ def test_prompts_writes_one_row_per_problem_and_language(tmp_path):
     assert "\ndef " in first["stop_sequences"]
 
 
+@pytest.mark.slow
 def test_reference_completions_of_the_prompts_pass_in_continue_mode(tmp_path):
     from harness.problems import load_problem_set
 
