@@ -1,11 +1,16 @@
-"""What isolation costs per candidate: bare process vs bubblewrap vs the warm Docker pool.
+"""What isolation costs per candidate: the bare backend vs bubblewrap vs the warm Docker pool.
+
+The baseline, ``--sandbox none``, runs the same step supervisor as the sandboxes (one warm
+supervisor per worker, the same limits through a cgroup or rlimits), as a plain host process:
+so the ratios measure isolation alone, not two different ways of enforcing limits.
 
 One run, one workload: the Python conformance set's references, repeated to ``--candidates``
 (at least 500), each judged end to end by the real Executor (render, compile, run, read the
 results, judge). The backends take turns in rounds, so a load change on a shared machine
-hits all of them alike; each starts with a warm-up (the Docker pool's containers started,
-caches filled) that is not timed. Prints time per candidate and the ratio to the bare process.
-Targets: Docker within 1.5x of bare, bubblewrap within 1.15x.
+hits all of them alike; each starts with a warm-up (the warm supervisors and the Docker pool's
+containers started, caches filled) that is not timed. Prints time per candidate, the ratio to
+the bare backend, and what enforces memory in each. Targets: Docker within 1.5x of bare,
+bubblewrap within 1.15x.
 
     python benchmarks/sandbox_overhead.py
     python benchmarks/sandbox_overhead.py --candidates 1000 --jobs 2 --rounds 10
@@ -55,12 +60,12 @@ def main() -> int:
         parser.error(f"--candidates must be at least {MIN_CANDIDATES}")
     names = [n for n in args.backends.split(",") if n]
     if "none" not in names:
-        parser.error("the bare process ('none') is the baseline and must be measured")
+        parser.error("the bare backend ('none') is the baseline and must be measured")
 
     problems = load_problem_set("conformance")
     runtime = load_runtime("python")
     samples = workload(args.candidates)
-    executors, sandboxes = {}, {}
+    executors, sandboxes, mechanisms = {}, {}, {}
     for name in names:
         try:
             box = make_sandbox(name)
@@ -70,6 +75,8 @@ def main() -> int:
             continue
         sandboxes[name] = box
         executors[name] = Executor(box, problems, {"python": runtime}, infra_retries=0)
+        described = box.describe()
+        mechanisms[name] = described.get("memory_limit") or described.get("limits", "-")
     seconds = Counter()
     outcomes = {name: Counter() for name in executors}
     try:
@@ -104,6 +111,8 @@ def main() -> int:
           f"{args.rounds} rounds")
     print(render(["backend", "candidates", "seconds", "ms/candidate", "vs bare", "target", "", "not passed"],
                  rows, align="lrrrrrll"))
+    for name, described in mechanisms.items():
+        print(f"{name} limits: {described}")
     return 0 if all(o.keys() <= {"passed"} for o in outcomes.values()) else 1
 
 
