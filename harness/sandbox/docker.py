@@ -2,7 +2,7 @@
 
 Each container has no network, a read-only root, tmpfs ``/work`` and ``/tmp``, no
 capabilities, no-new-privileges, uid 10001, and cgroup limits on memory (swap off), processes
-and CPU (one core). Its pid 1 is a small supervisor (``docker_agent.py``) that runs every step
+and CPU (one core). Its pid 1 is a small supervisor (``step_supervisor.py``) that runs every step
 with rlimits, a wall clock and an output cap; the backend reaches it over the container's
 attached stdin/stdout, so a step costs a fork, not a ``docker exec``.
 
@@ -351,7 +351,7 @@ class DockerSandbox(ClosingSandbox):
                           "all capabilities dropped, no-new-privileges, uid 10001"),
             "limits": (f"cgroup memory = step limit + {SUPERVISOR_MB} MB supervisor allowance, swap = memory; "
                        f"pids = step max_processes + 1; {CPUS} CPU; rlimits CPU/file size inside"),
-            "supervisor": "pid-1 step supervisor (harness/sandbox/docker_agent.py) on the image's python3",
+            "supervisor": "pid-1 step supervisor (harness/sandbox/step_supervisor.py) on the image's python3",
             "max_runs_per_container": self.max_runs,
             "images": self.images,
         }
