@@ -2,7 +2,8 @@
 
 Supports cgroup v2 (unified) and v1 (separate memory and pids hierarchies). When neither is
 writable (an unprivileged user without a delegated subtree) ``detect()`` returns None and the
-sandbox falls back to rlimits, which are weaker: RLIMIT_AS counts virtual, not resident, memory.
+sandbox falls back to rlimits, which are weaker: RLIMIT_DATA bounds each process's heap, not the
+step's resident memory in all, and makes an allocation fail instead of killing the step.
 """
 
 from __future__ import annotations
