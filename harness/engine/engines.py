@@ -134,7 +134,7 @@ def engine_factory(name: str, options: EngineOptions) -> EngineFactory:
 
 def _local(options: EngineOptions) -> EngineFactory:
     if options.address:
-        raise EngineError("--address is for a cluster engine (--engine ray)")
+        raise EngineError("--address is for --engine ray (a cluster), not the local pool")
     return lambda executor: LocalEngine(executor, options.jobs)
 
 
