@@ -6,6 +6,7 @@ bubblewrap on a laptop, Docker containers in production, a bare process for benc
 
 from __future__ import annotations
 
+import abc
 from typing import ContextManager, Protocol
 
 from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
@@ -53,11 +54,12 @@ class Sandbox(Protocol):
     def __exit__(self, *exc) -> None: ...
 
 
-class ClosingSandbox:
+class ClosingSandbox(abc.ABC):
     """The context-manager half of the protocol, shared by every backend."""
 
+    @abc.abstractmethod
     def close(self) -> None:
-        raise NotImplementedError
+        """End everything this backend started; safe to call twice; never raises."""
 
     def __enter__(self):
         return self

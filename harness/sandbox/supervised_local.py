@@ -12,6 +12,7 @@ limits the same way and differ only in isolation.
 
 from __future__ import annotations
 
+import abc
 import atexit
 import concurrent.futures as futures
 import contextlib
@@ -135,10 +136,10 @@ class SupervisedLocalSandbox(LocalSandbox):
         atexit.register(self.close)
 
     # -- what a subclass supplies --
+    @abc.abstractmethod
     def launch(self, needs: RuntimeSandboxNeeds, folder: Path, scratch: tuple[Path, ...],
                group: Cgroup | None) -> subprocess.Popen:
         """Start a sandbox whose supervisor speaks on the process's stdin and stdout."""
-        raise NotImplementedError
 
     def check_hello(self, hello: dict, process: subprocess.Popen) -> None:
         """Raise SupervisorTrouble when the supervisor is not where it should be."""
@@ -148,8 +149,10 @@ class SupervisedLocalSandbox(LocalSandbox):
         reaped, so its number is still its own), or None where there can be none."""
         return pidfd_of(process.pid)
 
+    @abc.abstractmethod
     def step_env(self, slot: Slot, needs: RuntimeSandboxNeeds, env: dict[str, str]) -> dict[str, str]:
-        raise NotImplementedError
+        """The environment a step runs with in ``slot``: the runtime's, the caller's, and what
+        the backend itself must set (paths, TMPDIR)."""
 
     def scratch_folders(self) -> tuple[Path, ...]:
         """Host folders a new sandbox needs besides its work dir (made here, removed with it)."""
