@@ -17,6 +17,7 @@ HARNESS = ROOT / "harness"
 LAYERS = [
     {"vocabulary", "yamlfiles", "locations", "console"},
     {"problems"},
+    {"extraction"},
     {"runtimes", "sandbox"},
     {"store"},
     {"metrics"},

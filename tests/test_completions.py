@@ -6,7 +6,7 @@ from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from harness.vocabulary import Reject, Sample
-from harness.engine.completions import assemble_code, read_dumps, strip_fence, truncate_at_stops
+from harness.engine.completions import read_dumps
 
 PROBLEMS = {"add_pair"}
 LANGUAGES = {"python"}
@@ -77,22 +77,6 @@ def test_arbitrary_bytes_account_for_every_line(tmp_path_factory, chunks):
     items = read(dump)
     assert len(items) == expected_lines
     assert [item.line for item in items] == list(range(1, expected_lines + 1))
-
-
-def test_continuations_are_cut_at_the_first_stop_sequence():
-    text = "    return 1\n\ndef extra():\n    pass\nprint(3)"
-    assert truncate_at_stops(text, ["\ndef ", "\nprint("]) == "    return 1\n"
-
-
-def test_a_fenced_answer_keeps_only_the_code():
-    answer = "Here you go:\n```python\ndef f():\n    return 1\n```\nHope it helps."
-    assert strip_fence(answer) == "def f():\n    return 1"
-    assert strip_fence("def f(): pass") == "def f(): pass"
-
-
-def test_modes_assemble_prompt_or_preamble():
-    assert assemble_code("continue", "P\n", "PRE\n", "body\n#tail", ["\n#"]) == "P\nbody"
-    assert assemble_code("whole", "P\n", "PRE\n", "```\ncode\n```", []) == "PRE\ncode"
 
 
 def test_sample_key_set_behaves_like_a_set_of_tuples():

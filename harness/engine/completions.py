@@ -10,12 +10,14 @@ import re
 from pathlib import Path
 from typing import Callable, Iterable, Iterator
 
+from ..extraction import Extraction, ExtractionRequest
+from ..problems import Problem
+from ..runtimes import Runtime
 from ..store.keys import SampleKeySet
 from ..vocabulary import Reject, Sample
 
 MODES = ("continue", "whole")
 MAX_COMPLETION_BYTES = 1_000_000
-_FENCE = re.compile(r"```[^\n`]*\n(.*?)(?:\n```|\Z)", re.DOTALL)
 
 
 def read_dumps(
@@ -100,26 +102,21 @@ def _parse_line(raw: bytes, source: str, number: int, problems: set[str], langua
     return problem, language, sample, completion
 
 
-def truncate_at_stops(completion: str, stops: Iterable[str]) -> str:
-    """Cut a continuation at the earliest stop sequence (the generator may not have)."""
-    cut = len(completion)
-    for stop in stops:
-        index = completion.find(stop)
-        if index != -1:
-            cut = min(cut, index)
-    return completion[:cut]
+def extraction_request(mode: str, runtime: Runtime, problem: Problem, prompt: str, preamble: str,
+                       completion: str, policy: str = "syntax") -> ExtractionRequest:
+    """Everything extraction needs to know about one completion of ``problem`` in ``runtime``."""
+    if mode not in MODES:
+        raise ValueError(f"unknown mode {mode!r}; choose one of: {', '.join(MODES)}")
+    return ExtractionRequest(mode=mode, completion=completion, prompt=prompt, preamble=preamble,
+                             function=runtime.name_of("function", problem.function),
+                             param_count=len(problem.params), stops=runtime.stop_sequences,
+                             spec=runtime.extraction, policy=policy)
 
 
-def strip_fence(completion: str) -> str:
-    """A chat model's answer often wraps the code in a fenced block: keep the first block."""
-    match = _FENCE.search(completion)
-    return match.group(1) if match else completion
-
-
-def assemble_code(mode: str, prompt: str, preamble: str, completion: str, stops: Iterable[str]) -> str:
+def assemble_code(runtime: Runtime, problem: Problem, mode: str, extraction: Extraction, preamble: str) -> str:
     """The candidate's source before the test driver is appended."""
     if mode == "continue":
-        return prompt + truncate_at_stops(completion, stops)
-    if mode == "whole":
-        return preamble + strip_fence(completion)
-    raise ValueError(f"unknown mode {mode!r}; choose one of: {', '.join(MODES)}")
+        return extraction.code
+    if not extraction.imports and not extraction.types:
+        return preamble + extraction.code
+    return runtime.assemble_whole(problem, extraction.code, extraction.imports, extraction.types)

@@ -15,7 +15,8 @@ import time
 from functools import lru_cache
 
 from ..vocabulary import Sample
-from .completions import assemble_code
+from ..extraction import Extraction, extract
+from .completions import assemble_code, extraction_request
 from ..problems import Problem, ProblemSet
 from ..runtimes import Runtime
 from ..vocabulary import LimitOverrides, Limits, StepResult, Verdict
@@ -39,7 +40,10 @@ class Executor:
         repeat: int = 1,
         infra_retries: int = 3,
         retry_backoff: float = 0.5,
+        extract_policy: str = "syntax",
     ):
+        self.extract_policy = extract_policy
+        self._extraction = lru_cache(maxsize=4096)(self._extract_uncached)
         self.sandbox = sandbox
         self.repeat = repeat
         self.infra_retries = infra_retries
@@ -62,11 +66,21 @@ class Executor:
         return (runtime.step_limits("compile"),
                 runtime.step_limits("run", problem.limits, self.limit_overrides))
 
+    def extraction(self, sample: Sample) -> Extraction:
+        """What of the model's text will run, and the record of how it was chosen."""
+        return self._extraction(sample.problem, sample.language, sample.completion)
+
+    def _extract_uncached(self, problem_id: str, language: str, completion: str) -> Extraction:
+        prompt, preamble = self._prompt(problem_id, language)
+        request = extraction_request(self.mode, self.runtimes[language], self.problems.problems[problem_id],
+                                     prompt, preamble, completion, self.extract_policy)
+        return extract(request)
+
     def code(self, sample: Sample) -> str:
         """The candidate's source before the driver: what the model's text amounts to."""
-        prompt, preamble = self._prompt(sample.problem, sample.language)
-        return assemble_code(self.mode, prompt, preamble, sample.completion,
-                             self.runtimes[sample.language].stop_sequences)
+        _, preamble = self._prompt(sample.problem, sample.language)
+        return assemble_code(self.runtimes[sample.language], self.problems.problems[sample.problem],
+                             self.mode, self.extraction(sample), preamble)
 
     def program(self, sample: Sample, nonce: str, results_file: str) -> str:
         problem = self.problems.problems[sample.problem]

@@ -26,6 +26,7 @@ from .scheduling import interleave
 from ..sandbox import Sandbox
 from ..store import MANIFEST, SUMMARY, ResultStore, StoreMismatch, read_rows
 from .cache import VerdictCache
+from ..extraction import policy_label
 
 
 @dataclass
@@ -41,6 +42,7 @@ class ScoreOptions:
     label: str | None = None
     repeat: int = 1
     cache_dir: Path | None = None
+    extract: str = "syntax"
 
     def __post_init__(self) -> None:
         self.limit_overrides = LimitOverrides.parse(self.limit_overrides)
@@ -97,6 +99,7 @@ def build_manifest(options: ScoreOptions, problems: ProblemSet, runtimes: dict[s
         "problem_set": {"name": problems.name, "path": str(problems.path), "digest": problems.digest,
                         "problems": len(problems)},
         "mode": options.mode,
+        "extraction": policy_label(options.extract),
         "runtimes": runtime_info,
         "sandbox": sandbox.describe(),
         "limit_overrides": options.limit_overrides.set_fields(),
@@ -105,7 +108,7 @@ def build_manifest(options: ScoreOptions, problems: ProblemSet, runtimes: dict[s
     }
 
 
-IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "limit_overrides", "repeat")
+IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "extraction", "limit_overrides", "repeat")
 
 
 def check_resumable(previous: dict | None, manifest: dict, out: Path) -> None:
@@ -132,7 +135,8 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
           engine_factory=None) -> ScoreOutcome:
     """Score the dumps into ``options.out``. ``engine_factory(executor)`` picks where candidates
     run (default: a local thread pool of ``options.jobs`` workers)."""
-    executor = Executor(sandbox, problems, runtimes, options.mode, options.limit_overrides, repeat=options.repeat)
+    executor = Executor(sandbox, problems, runtimes, options.mode, options.limit_overrides, repeat=options.repeat,
+                        extract_policy=options.extract)
     engine = engine_factory(executor) if engine_factory else LocalEngine(executor, options.jobs)
     cache = VerdictCache(options.cache_dir)
     manifest = build_manifest(options, problems, runtimes, sandbox, executor)
@@ -155,8 +159,9 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
             progress = Progress(total, label=options.label or "scoring", enabled=options.progress)
             waiting: dict[str, list] = {}  # program key -> samples sharing the execution in flight
 
-            def record(sample_key: tuple, verdict: Verdict, shared: bool) -> None:
+            def record(sample_key: tuple, verdict: Verdict, shared: bool, extraction: dict) -> None:
                 row = verdict.row(sample_key)
+                row["extraction"] = extraction
                 if shared:
                     row["shared"] = True
                     counts["shared"] += 1
@@ -185,13 +190,14 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
                         yield None
                         continue
                     key = executor.program_key(item)
+                    how = executor.extraction(item).record
                     if key in waiting:
-                        waiting[key].append(item.key)  # the key alone: completions can be large
+                        waiting[key].append((item.key, how))  # not the sample: completions can be large
                         yield None
                         continue
                     cached = cache.get(key)
                     if cached is not None:
-                        record(item.key, cached, shared=True)
+                        record(item.key, cached, shared=True, extraction=how)
                         yield None
                         continue
                     waiting[key] = []
@@ -199,9 +205,9 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
 
             def finish(key: str, sample, verdict: Verdict) -> None:
                 cache.put(key, verdict)
-                record(sample.key, verdict, shared=False)
-                for other in waiting.pop(key, []):
-                    record(other, verdict, shared=True)
+                record(sample.key, verdict, shared=False, extraction=executor.extraction(sample).record)
+                for other, how in waiting.pop(key, []):
+                    record(other, verdict, shared=True, extraction=how)
 
             def priority(language: str) -> int:
                 return 1 if runtimes[language].compile is not None else 0

@@ -16,7 +16,9 @@ from functools import cached_property
 from pathlib import Path
 
 import jinja2
+import jinja2.meta
 
+from ..extraction import ExtractionSpec, ExtractionSpecError, parse_extraction_spec
 from ..locations import runtime_search_path
 from ..problems import Problem
 from ..problems.types import GENERICS, SCALARS
@@ -60,6 +62,7 @@ class Runtime:
     reserved_words: frozenset[str] = frozenset()
     reserved_rename: str = "{name}_"
     unsupported_types: dict[str, str] = field(default_factory=dict)
+    extraction: ExtractionSpec | None = None
 
     @cached_property
     def templates(self) -> jinja2.Environment:
@@ -125,6 +128,8 @@ class Runtime:
             "returns": problem.returns,
             "examples": problem.examples,
             "description_lines": problem.description.splitlines(),
+            "candidate_imports": "",
+            "candidate_types": "",
         }
 
     def reference(self, problem: Problem) -> str | None:
@@ -145,13 +150,39 @@ class Runtime:
     def render_prompt(self, problem: Problem) -> str:
         return self.templates.get_template("prompt.j2").render(self.context(problem))
 
-    def render_preamble(self, problem: Problem) -> str:
-        """What precedes a whole-function completion (imports, an enclosing class opener)."""
+    def render_preamble(self, problem: Problem, candidate_imports: str = "", candidate_types: str = "") -> str:
+        """What precedes a whole-function completion (imports, an enclosing class opener).
+        ``candidate_imports`` and ``candidate_types`` are what extraction kept of the model's
+        imports and of its top-level types; a template that names them places them where its
+        language requires, and :meth:`assemble_whole` puts them first for one that does not."""
         try:
             template = self.templates.get_template("preamble.j2")
         except jinja2.TemplateNotFound:
             return ""
-        return template.render(self.context(problem))
+        context = self.context(problem)
+        context.update(candidate_imports=candidate_imports, candidate_types=candidate_types)
+        return template.render(context)
+
+    @cached_property
+    def preamble_places(self) -> frozenset[str]:
+        """Which of ``candidate_imports``/``candidate_types`` the preamble template places."""
+        try:
+            source = self.templates.loader.get_source(self.templates, "preamble.j2")[0]
+        except jinja2.TemplateNotFound:
+            return frozenset()
+        names = jinja2.meta.find_undeclared_variables(self.templates.parse(source))
+        return frozenset(names & {"candidate_imports", "candidate_types"})
+
+    def assemble_whole(self, problem: Problem, code: str, imports: str = "", types: str = "") -> str:
+        """The candidate's source in whole mode: preamble, then the model's selected code, with
+        its imports and top-level types where the language requires them."""
+        places = self.preamble_places
+        preamble = self.render_preamble(problem, imports if "candidate_imports" in places else "",
+                                        types if "candidate_types" in places else "")
+        head = "".join(part + "\n" for part in (
+            imports if "candidate_imports" not in places else "",
+            types if "candidate_types" not in places else "") if part)
+        return head + preamble + code
 
     def render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
         """The full source to run: the candidate's code followed by the generated test driver."""
@@ -283,6 +314,12 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
     unknown = set(unsupported) - set(SCALARS) - set(GENERICS)
     if unknown:
         raise fail("unsupported_types", f"unknown type name(s) {', '.join(sorted(unknown))}")
+    extraction = None
+    if data.get("extraction") is not None:
+        try:
+            extraction = parse_extraction_spec(data["extraction"])
+        except ExtractionSpecError as exc:
+            raise fail("extraction", str(exc)) from None
     return Runtime(
         name=path.name,
         path=path,
@@ -307,6 +344,7 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
         reserved_words=frozenset(reserved),
         reserved_rename=rename,
         unsupported_types=dict(unsupported),
+        extraction=extraction,
     )
 
 

@@ -1,0 +1,282 @@
+"""Reading source text with a tree-sitter grammar: top-level items (functions, other
+definitions, imports), their names, parameter counts, and the names they mention.
+
+Everything here is a selection over the parse tree; no text is generated.
+"""
+
+from __future__ import annotations
+
+import importlib
+import re
+import threading
+from dataclasses import dataclass, field
+from functools import lru_cache
+
+import tree_sitter
+
+from .spec import ExtractionSpec
+
+_WORD = re.compile(r"[^\W\d]\w*|\$\w+", re.UNICODE)
+_local = threading.local()
+MAX_DEPTH = 12
+
+
+class GrammarMissing(RuntimeError):
+    """The grammar a runtime declares is not installed."""
+
+
+@lru_cache(maxsize=None)
+def language(module: str, function: str) -> tree_sitter.Language:
+    try:
+        loaded = importlib.import_module(module)
+    except ImportError:
+        raise GrammarMissing(f"tree-sitter grammar {module!r} is not installed "
+                             f"(pip install {module.replace('_', '-')})") from None
+    entry = getattr(loaded, function, None)
+    if entry is None:
+        raise GrammarMissing(f"grammar module {module!r} has no function {function!r}")
+    return tree_sitter.Language(entry())
+
+
+def parse(spec: ExtractionSpec, source: bytes) -> tree_sitter.Tree:
+    """Parsers are not thread-safe: each thread keeps its own per grammar."""
+    parsers = _local.__dict__.setdefault("parsers", {})
+    key = (spec.grammar, spec.grammar_function)
+    parser = parsers.get(key)
+    if parser is None:
+        parser = parsers[key] = tree_sitter.Parser(language(*key))
+    return parser.parse(source)
+
+
+@dataclass
+class Item:
+    """A top-level piece of a source file (or a member of an unwrapped class)."""
+
+    kind: str  # function | definition | import | other
+    node: tree_sitter.Node
+    inner: tree_sitter.Node
+    text: str
+    name: str | None = None
+    refs: frozenset[str] = frozenset()
+    params: tuple[int, float] | None = None  # (required, most); None: not declared
+    wrapped: bool = False
+    bound: frozenset[str] = field(default_factory=frozenset)
+
+    @property
+    def label(self) -> str:
+        return f"{self.kind} {self.name}" if self.name else self.inner.type
+
+    def accepts(self, count: int) -> bool:
+        return self.params is None or self.params[0] <= count <= self.params[1]
+
+
+def items_of(spec: ExtractionSpec, source: bytes, container: tree_sitter.Node, wrapped: bool = False) -> list[Item]:
+    return [item_of(spec, source, child, wrapped) for child in container.named_children
+            if "comment" not in child.type]
+
+
+def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped: bool = False) -> Item:
+    inner = _unwrap_transparent(spec, node)
+    text = node_text(source, node)
+    if node.type in spec.imports or inner.type in spec.imports:
+        return Item("import", node, inner, text, refs=words(source, node), wrapped=wrapped,
+                    bound=frozenset(import_names(spec, source, inner)))
+    if inner.type in spec.functions or inner.type in spec.definitions:
+        kind = "function" if inner.type in spec.functions else "definition"
+        name = definition_name(source, inner, spec.definitions.get(inner.type))
+        if name is None:  # `print(x)` is an expression statement, like `LIMIT = 3`
+            return Item("other", node, inner, text, refs=words(source, node), wrapped=wrapped)
+        params = parameter_range(spec, inner) if kind == "function" else None
+        return Item(kind, node, inner, text, name, words(source, node), params, wrapped)
+    return Item("other", node, inner, text, refs=words(source, node), wrapped=wrapped)
+
+
+def _unwrap_transparent(spec: ExtractionSpec, node: tree_sitter.Node) -> tree_sitter.Node:
+    for _ in range(MAX_DEPTH):
+        if node.type not in spec.transparent:
+            return node
+        inner = next((c for c in node.named_children
+                      if spec.defines(c.type) or c.type in spec.transparent or c.type in spec.imports), None)
+        if inner is None:
+            return node
+        node = inner
+    return node
+
+
+def node_text(source: bytes, node: tree_sitter.Node) -> str:
+    """The node's text, from the start of its line when only blanks precede it there, so that
+    relative indentation survives."""
+    start = node.start_byte
+    line_start = source.rfind(b"\n", 0, start) + 1
+    if not source[line_start:start].strip():
+        start = line_start
+    return source[start:node.end_byte].decode("utf-8", "replace")
+
+
+def words(source: bytes, node: tree_sitter.Node) -> frozenset[str]:
+    """The identifier-like names a node mentions: its named leaves that are words."""
+    found: set[str] = set()
+    stack = [node]
+    while stack:
+        current = stack.pop()
+        if current.child_count == 0:
+            if current.is_named:
+                text = source[current.start_byte:current.end_byte].decode("utf-8", "replace")
+                if _WORD.fullmatch(text):
+                    found.add(text.lstrip("$"))
+            continue
+        stack.extend(current.children)
+    return frozenset(found)
+
+
+def definition_name(source: bytes, node: tree_sitter.Node, field_hint: str | None = None) -> str | None:
+    """Follow ``name``/``declarator`` fields (C's declarators nest: ``int *f(...)``) down to
+    the identifier that names a definition."""
+    if field_hint:
+        named = node.child_by_field_name(field_hint)
+        return _leaf_name(source, named) if named is not None else None
+    current = node
+    for _ in range(MAX_DEPTH):
+        child = current.child_by_field_name("name") or current.child_by_field_name("declarator")
+        if child is None:
+            child = next((c for c in current.named_children
+                          if c.type.endswith(("declarator", "_spec", "assignment", "declaration"))), None)
+        if child is None:
+            child = current.child_by_field_name("left") or current.child_by_field_name("pattern")
+        if child is None:
+            return None
+        if child.child_count == 0 or "identifier" in child.type or child.type in ("name", "constant"):
+            return _leaf_name(source, child)
+        current = child
+    return None
+
+
+def _leaf_name(source: bytes, node: tree_sitter.Node) -> str | None:
+    text = source[node.start_byte:node.end_byte].decode("utf-8", "replace").strip()
+    # `Solution::foo`, `M.foo`, `$foo`: the last word names it.
+    parts = re.findall(r"[^\W\d]\w*", text)
+    return parts[-1] if parts else None
+
+
+def parameter_range(spec: ExtractionSpec, node: tree_sitter.Node) -> tuple[int, float] | None:
+    """(required, most) parameters of a function node; None when the language declares none
+    (a Perl sub reads @_)."""
+    params = _find_parameters(spec, node)
+    if params is None:
+        return None
+    required, most = 0, 0.0
+    for child in params.named_children:
+        kind = child.type
+        if "comment" in kind or kind in spec.skip_parameters:
+            continue
+        names = len(child.children_by_field_name("name"))
+        count = names if names > 1 else 1
+        if any(word in kind for word in ("splat", "variadic", "rest", "spread", "dictionary")):
+            most = float("inf")
+            continue
+        optional = (any(word in kind for word in ("default", "optional"))
+                    or any(child.child_by_field_name(f) is not None for f in ("value", "default_value", "default")))
+        most += count
+        if not optional:
+            required += count
+    return required, most
+
+
+def _find_parameters(spec: ExtractionSpec, node: tree_sitter.Node) -> tree_sitter.Node | None:
+    queue = [(node, 0)]
+    while queue:
+        current, depth = queue.pop(0)
+        for name in spec.parameters:
+            found = current.child_by_field_name(name)
+            if found is not None:
+                return found
+        if depth < 4:
+            queue.extend((c, depth + 1) for c in current.named_children
+                         if c.type not in ("block", "compound_statement", "statement_block", "body_statement"))
+    return None
+
+
+def import_names(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node) -> set[str]:
+    """The names an import binds, for the languages where binding one twice is an error."""
+    def text(n) -> str:
+        return source[n.start_byte:n.end_byte].decode("utf-8", "replace")
+
+    if spec.import_naming == "go_import":
+        names = set()
+        for spec_node in _descendants(node, "import_spec"):
+            alias = spec_node.child_by_field_name("name")
+            path = spec_node.child_by_field_name("path")
+            if alias is not None:
+                names.add(text(alias))
+            elif path is not None:
+                names.add(text(path).strip('"`').rsplit("/", 1)[-1])
+        return names
+    if spec.import_naming == "rust_use":
+        return _rust_use_names(node, text)
+    if spec.import_naming == "es_import":
+        names = set()
+        for child in _descendants(node, "import_specifier"):
+            alias = child.child_by_field_name("alias") or child.child_by_field_name("name")
+            if alias is not None:
+                names.add(text(alias))
+        for clause in _descendants(node, "import_clause"):
+            for child in clause.named_children:
+                if child.type == "identifier":
+                    names.add(text(child))
+        for child in _descendants(node, "namespace_import"):
+            names |= {text(c) for c in child.named_children if c.type == "identifier"}
+        return names
+    return set()
+
+
+def _rust_use_names(node: tree_sitter.Node, text) -> set[str]:
+    names: set[str] = set()
+
+    def visit(n) -> None:
+        if n.type == "use_as_clause":
+            alias = n.child_by_field_name("alias")
+            if alias is not None:
+                names.add(text(alias))
+        elif n.type == "scoped_identifier":
+            name = n.child_by_field_name("name")
+            if name is not None:
+                names.add(text(name))
+        elif n.type in ("identifier", "crate", "self"):
+            names.add(text(n))
+        elif n.type == "use_wildcard":
+            return
+        else:
+            for child in n.named_children:
+                if child.type == "scoped_identifier" and n.type == "scoped_use_list":
+                    continue  # the path before a {list}
+                visit(child)
+
+    argument = node.child_by_field_name("argument")
+    if argument is not None:
+        visit(argument)
+    return names
+
+
+def _descendants(node: tree_sitter.Node, node_type: str):
+    stack = [node]
+    while stack:
+        current = stack.pop()
+        if current.type == node_type:
+            yield current
+        stack.extend(reversed(current.named_children))
+
+
+def functions_named(spec: ExtractionSpec, source: bytes, root: tree_sitter.Node, name: str,
+                    within: int = 4) -> list[tree_sitter.Node]:
+    """Function nodes named ``name`` at most ``within`` levels down (inside a class, say)."""
+    found = []
+    queue = [(root, 0)]
+    while queue:
+        current, depth = queue.pop(0)
+        for child in current.named_children:
+            inner = _unwrap_transparent(spec, child)
+            if inner.type in spec.functions and definition_name(source, inner, spec.definitions.get(inner.type)) == name:
+                found.append(child)
+            elif depth < within:
+                queue.append((child, depth + 1))
+    return found

@@ -1,0 +1,198 @@
+"""Extraction: fences read as Markdown reads them, the target function found by the grammar,
+helpers and imports kept by need, the old textual rules under ``--extract strict``, and no
+input that can make it raise."""
+
+from __future__ import annotations
+
+import pytest
+from hypothesis import given, settings, strategies as st
+
+from harness.engine.completions import extraction_request
+from harness.extraction import ExtractionRequest, extract, fenced_blocks, parse_extraction_spec
+from harness.extraction.extract import truncate_at_stops
+from harness.extraction.spec import ExtractionSpecError
+from harness.problems import load_problem_set
+from harness.runtimes import load_runtime
+
+
+@pytest.fixture(scope="module")
+def core():
+    return load_problem_set("core")
+
+
+def run(language, problem, mode, text, core, policy="syntax"):
+    runtime = load_runtime(language)
+    prob = core.problems[problem]
+    request = extraction_request(mode, runtime, prob, runtime.render_prompt(prob), runtime.render_preamble(prob),
+                                 text, policy)
+    return extract(request)
+
+
+# --- fences (CommonMark 0.31, section 4.5 "Fenced code blocks", read from memory) ----------
+
+def test_backtick_and_tilde_fences_with_and_without_tags():
+    text = "a\n```python\nx = 1\n```\nb\n~~~\ny = 2\n~~~\n"
+    assert [(b.tag, b.text) for b in fenced_blocks(text)] == [("python", "x = 1"), ("", "y = 2")]
+
+
+def test_a_fence_closes_only_on_the_same_character_at_least_as_long():
+    text = "````\n```\ninner\n```\n````\n~~~\n```\n~~~"
+    assert [b.text for b in fenced_blocks(text)] == ["```\ninner\n```", "```"]
+
+
+def test_an_indented_fence_in_a_list_item_loses_its_indentation_only():
+    text = "1. code:\n   ```js\n   if (x) {\n     y();\n   }\n   ```\n"
+    assert fenced_blocks(text)[0].text == "if (x) {\n  y();\n}"
+
+
+def test_triple_backticks_inside_prose_are_not_a_fence():
+    assert fenced_blocks("call ```f(1)``` here\nand ```this``` too") == []
+
+
+def test_an_unclosed_fence_runs_to_the_end():
+    (block,) = fenced_blocks("```python\ndef f():\n    return 1")
+    assert block.text == "def f():\n    return 1" and not block.closed
+
+
+def test_a_backtick_fence_info_string_may_not_hold_a_backtick():
+    # CommonMark 4.5: "If the info string comes after a backtick fence, it may not contain any backtick".
+    # The closing line then opens a block of its own, empty and unclosed.
+    assert [(b.text, b.first_line) for b in fenced_blocks("```a`b\ncode\n```")] == [("", 3)]
+
+
+# --- the textual rules (--extract strict keeps the old behaviour) ----------------------------
+
+def test_strict_continuations_are_cut_at_the_first_stop_sequence():
+    text = "    return 1\n\ndef extra():\n    pass\nprint(3)"
+    assert truncate_at_stops(text, ["\ndef ", "\nprint("]) == "    return 1\n"
+
+
+def test_strict_whole_mode_keeps_the_first_fenced_block(core):
+    answer = "Run:\n```bash\npython3 x.py\n```\n```python\ndef add_fractions(fracs):\n    return (0, 1)\n```"
+    strict = run("python", "add_fractions", "whole", answer, core, policy="strict")
+    assert strict.code == "python3 x.py" and strict.record["method"] == "first_block"
+    syntax = run("python", "add_fractions", "whole", answer, core)
+    assert syntax.code.startswith("def add_fractions") and syntax.record["source"] == "block 2 of 2 (python)"
+
+
+def test_unknown_policy_is_refused(core):
+    with pytest.raises(ValueError, match="unknown extraction policy"):
+        run("python", "add_fractions", "whole", "x", core, policy="guess")
+
+
+# --- whole mode --------------------------------------------------------------------------------
+
+def test_whole_mode_keeps_referenced_helpers_and_drops_main_tests_and_calls(core):
+    answer = """```python
+import sys
+from math import gcd
+
+LIMIT = 10
+
+def unused():
+    return 1
+
+def reduce(n, d):
+    g = gcd(n, d) or 1
+    return n // g, d // g
+
+def add_fractions(fracs):
+    return reduce(sum(p for p, _ in fracs), LIMIT)
+
+def main():
+    print(add_fractions([(1, 2)]))
+
+if __name__ == "__main__":
+    main()
+print(add_fractions([]))
+```"""
+    done = run("python", "add_fractions", "whole", answer, core)
+    assert "def reduce" in done.code and "LIMIT = 10" in done.code and "def add_fractions" in done.code
+    assert "def unused" not in done.code and "def main" not in done.code and "__main__" not in done.code
+    assert "print(" not in done.code
+    assert done.imports == "import sys\nfrom math import gcd"
+    assert "function main" in done.record["dropped"] and "function unused" in done.record["dropped"]
+
+
+def test_a_block_defining_the_target_with_the_right_arity_beats_one_with_another(core):
+    answer = ("```python\ndef add_fractions(fracs):\n    return (1, 1)\n```\n"
+              "```python\ndef add_fractions(fracs, extra, more):\n    return (2, 2)\n```")
+    done = run("python", "add_fractions", "whole", answer, core)
+    assert "(1, 1)" in done.code and done.record["source"] == "block 1 of 2 (python)"
+
+
+def test_a_block_with_a_syntax_error_elsewhere_is_used_when_the_target_is_intact(core):
+    answer = "```python\ndef add_fractions(fracs):\n    return (0, 1)\n\nprint(add_fractions([]]\n```"
+    done = run("python", "add_fractions", "whole", answer, core)
+    assert done.record["method"] == "parser" and done.code.strip() == "def add_fractions(fracs):\n    return (0, 1)"
+
+
+def test_text_that_defines_no_target_falls_back_to_the_textual_rules_and_says_so(core):
+    done = run("python", "add_fractions", "whole", "I cannot answer that.", core)
+    assert done.record["method"] == "whole_text" and "no block defines add_fractions" in done.record["why"]
+
+
+def test_nothing_is_rewritten_every_kept_line_is_the_models_own(core):
+    answer = "```python\nfrom math import gcd  # note\n\ndef add_fractions(fracs):  # keep me\n    return (0,    1)\n```"
+    done = run("python", "add_fractions", "whole", answer, core)
+    for line in (done.imports + "\n" + done.code).splitlines():
+        assert line in answer
+
+
+# --- continue mode -----------------------------------------------------------------------------
+
+def test_continue_mode_ends_where_the_function_ends_keeping_comments_and_strings(core):
+    body = ("    total = (0, 1)\n# a comment in column 0\n    s = '''\ndef not_a_function():\n'''\n"
+            "    return total\n\nprint(add_fractions([]))\n")
+    done = run("python", "add_fractions", "continue", body, core)
+    assert done.code.endswith("    return total\n") and "# a comment in column 0" in done.code
+    assert done.record["method"] == "parser"
+    strict = run("python", "add_fractions", "continue", body, core, policy="strict")
+    assert "return total" not in strict.code  # the old rules cut at the comment
+
+
+def test_continue_mode_keeps_a_later_helper_only_when_the_function_calls_it(core):
+    body = "    return helper(fracs)\n\ndef helper(x):\n    return (0, 1)\n\ndef other():\n    return 2\n"
+    done = run("python", "add_fractions", "continue", body, core)
+    assert "def helper" in done.code and "def other" not in done.code
+    assert done.record["kept"] == ["function helper"] and done.record["dropped"] == ["function other"]
+
+
+def test_an_unfinished_function_falls_back_to_stop_sequences(core):
+    done = run("python", "add_fractions", "continue", "    return (0,\n\ndef f(", core)
+    assert done.record["method"] == "stop_sequences"
+
+
+# --- hostile input -------------------------------------------------------------------------------
+
+@settings(max_examples=150, deadline=None)
+@given(st.text(alphabet=st.sampled_from(list("def add_fractions():\n ```~{}[]()'\"#\\x:=\t")), max_size=400),
+       st.sampled_from(["whole", "continue"]))
+def test_no_text_makes_extraction_raise(core, text, mode):
+    done = run("python", "add_fractions", mode, text, core)
+    assert isinstance(done.code, str) and done.record["method"]
+
+
+def test_deep_nesting_and_huge_numbers_end_as_a_selection(core):
+    deep = "```python\ndef add_fractions(fracs):\n    return " + "(" * 5000 + ")" * 5000 + "\n```"
+    assert run("python", "add_fractions", "whole", deep, core).record["method"]
+    big = "```python\ndef add_fractions(fracs):\n    return (" + "9" * 100000 + ", 1)\n```"
+    assert "9" * 100000 in run("python", "add_fractions", "whole", big, core).code
+
+
+# --- the runtime.yaml section ---------------------------------------------------------------------
+
+def test_a_malformed_extraction_section_names_the_field():
+    with pytest.raises(ExtractionSpecError, match="'functions'"):
+        parse_extraction_spec({"grammar": "tree_sitter_python"})
+    with pytest.raises(ExtractionSpecError, match="unknown field"):
+        parse_extraction_spec({"grammar": "tree_sitter_python", "functions": ["f"], "fucntions": []})
+    with pytest.raises(ExtractionSpecError, match="'import_naming'"):
+        parse_extraction_spec({"grammar": "g", "functions": ["f"], "import_naming": "magic"})
+
+
+def test_a_grammar_that_is_not_installed_falls_back_and_says_which(core):
+    spec = parse_extraction_spec({"grammar": "tree_sitter_no_such_language", "functions": ["function_definition"]})
+    request = ExtractionRequest("whole", "```\ndef f(): pass\n```", "", "", "f", 0, (), spec)
+    done = extract(request)
+    assert done.record["method"] == "first_block" and "tree_sitter_no_such_language" in done.record["why"]
