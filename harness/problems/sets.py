@@ -6,13 +6,17 @@ import hashlib
 import re
 from dataclasses import dataclass, field
 from pathlib import Path
+from typing import ClassVar
 
 from ..locations import bundled_dir
 from ..vocabulary import LimitOverrides
 from ..yamlfiles import read_yaml
+from .calibration import CALIBRATED_FILE, DEFAULT_MARK, read_calibrated_limits
+from .programs import ProgramProblem, case_files, parse_program_problem
 from .types import FloatRule, Type, TypeSyntaxError, check_value, parse_type
 
 DIFFICULTIES = ("easy", "medium", "hard")
+KINDS = ("function", "program")
 IDENTIFIER = re.compile(r"^[a-z][a-z0-9_]*$")
 # PEP 485's defaults (math.isclose): relative 1e-9, absolute 0, so a tiny expected value is
 # checked rather than swallowed by an absolute tolerance larger than itself.
@@ -39,6 +43,8 @@ class Case:
 
 @dataclass(frozen=True)
 class Problem:
+    kind: ClassVar[str] = "function"
+
     id: str
     title: str
     difficulty: str
@@ -63,8 +69,14 @@ class ProblemSet:
     name: str
     description: str
     path: Path
-    problems: dict[str, Problem]
+    problems: dict[str, "Problem | ProgramProblem"]
     digest: str
+    calibration: dict = field(default_factory=dict)  # calibrated_limits.yaml's header, if any
+
+    @property
+    def kinds(self) -> dict[str, str]:
+        """Problem id -> kind (function or program)."""
+        return {pid: p.kind for pid, p in self.problems.items()}
 
     def __len__(self) -> int:
         return len(self.problems)
@@ -88,14 +100,17 @@ def load_problem_set(name_or_path: str) -> ProblemSet:
     meta_file = path / "set.yaml"
     if meta_file.exists():
         meta = _read_yaml(meta_file) or {}
-    problems: dict[str, Problem] = {}
+    problems: dict[str, Problem | ProgramProblem] = {}
     hasher = hashlib.sha256()
     for file in sorted(path.glob("*.yaml")):
-        if file.name == "set.yaml":
+        if file.name in ("set.yaml", CALIBRATED_FILE):
             continue
         hasher.update(file.name.encode() + b"\0" + file.read_bytes() + b"\0")
         problem = parse_problem(_read_yaml(file), file)
         problems[problem.id] = problem
+    # What decides a program problem's cases and checks lives beside the YAML: in the digest too.
+    for file in sorted({f for p in problems.values() if p.kind == "program" for f in case_files(p)}):
+        hasher.update(str(file.relative_to(path)).encode() + b"\0" + file.read_bytes() + b"\0")
     for language, problem_id, file in _sidecar_references(path):
         hasher.update(str(file.relative_to(path)).encode() + b"\0" + file.read_bytes() + b"\0")
         if problem_id not in problems:
@@ -105,13 +120,49 @@ def load_problem_set(name_or_path: str) -> ProblemSet:
         problems[problem_id].reference[language] = file.read_text(encoding="utf-8")
     if not problems:
         raise ProblemError(f"{path}: no problem files (*.yaml) found")
+    for folder, language, problem_id, name, file in _program_variants(path):
+        problem = problems.get(problem_id)
+        if problem is None or problem.kind != "program":
+            raise ProblemError(f"{file}: {folder} program for {problem_id!r}, which is not a program problem of the set")
+        hasher.update(str(file.relative_to(path)).encode() + b"\0" + file.read_bytes() + b"\0")
+        text = file.read_text(encoding="utf-8")
+        if folder == "slow":
+            problem.slow[language] = text
+        else:
+            problem.wrong.setdefault(language, {})[name] = text
+    calibration = {}
+    calibrated_file = path / CALIBRATED_FILE
+    if calibrated_file.is_file():
+        hasher.update(CALIBRATED_FILE.encode() + b"\0" + calibrated_file.read_bytes() + b"\0")
+        program_ids = {pid for pid, p in problems.items() if p.kind == "program"}
+        calibration, limits = read_calibrated_limits(calibrated_file, program_ids, ProblemError)
+        for problem_id, languages in limits.items():
+            problems[problem_id].calibrated.update(
+                {language: entry for language, entry in languages.items() if entry != DEFAULT_MARK})
     return ProblemSet(
         name=str(meta.get("name", path.name)),
         description=str(meta.get("description", "")),
         path=path,
         problems=problems,
         digest=hasher.hexdigest(),
+        calibration=calibration,
     )
+
+
+def _program_variants(path: Path):
+    """Programs that must fail, kept beside a set's program problems: ``slow/<language>/<id>.<ext>``
+    (a naive solution the time limit must stop) and ``wrong/<language>/<id>-<what>.<ext>`` (a
+    wrong answer the checker must catch). Yields (folder, language, problem id, name, file)."""
+    for folder in ("slow", "wrong"):
+        root = path / folder
+        if not root.is_dir():
+            continue
+        for language_dir in sorted(p for p in root.iterdir() if p.is_dir()):
+            for file in sorted(p for p in language_dir.iterdir() if p.is_file()):
+                problem_id, _, what = file.stem.partition("-")
+                if folder == "wrong" and not what:
+                    raise ProblemError(f"{file}: a wrong program is named <problem id>-<what>.<ext>")
+                yield folder, language_dir.name, problem_id, what or file.stem, file
 
 
 def _sidecar_references(path: Path):
@@ -129,7 +180,7 @@ def _read_yaml(file: Path):
     return read_yaml(file, ProblemError)
 
 
-def parse_problem(data: object, file: Path) -> Problem:
+def parse_problem(data: object, file: Path) -> Problem | ProgramProblem:
     def fail(field_name: str, message: str) -> ProblemError:
         return ProblemError(f"{file}: field '{field_name}': {message}")
 
@@ -155,6 +206,24 @@ def parse_problem(data: object, file: Path) -> Problem:
     tags = data.get("tags", [])
     if not isinstance(tags, list) or not all(isinstance(t, str) for t in tags):
         raise fail("tags", "expected a list of strings")
+    kind = data.get("kind", "function")
+    if kind not in KINDS:
+        raise fail("kind", f"{kind!r} is not one of {', '.join(KINDS)}")
+    if kind == "program":
+        try:
+            limits = LimitOverrides.parse(data.get("limits"))
+        except ValueError as exc:
+            raise fail("limits", str(exc)) from None
+        reference = data.get("reference", {})
+        if not isinstance(reference, dict) or not all(isinstance(v, str) for v in reference.values()):
+            raise fail("reference", "expected a mapping of language name to a whole program's source text")
+        common = dict(id=pid, title=str(data.get("title", pid.replace("_", " ").capitalize())),
+                      difficulty=difficulty, tags=tuple(tags), description=description, limits=limits,
+                      reference=dict(reference))
+        return parse_program_problem(data, file, fail, common)
+    for foreign in ("checker",):
+        if foreign in data:
+            raise fail(foreign, "only problems of kind program take a checker (add kind: program?)")
 
     signature = require("signature", dict)
     function = require("name", str, signature, "signature.")
