@@ -29,7 +29,12 @@ class Workspace(Protocol):
     def read(self, name: str, max_bytes: int) -> bytes | None:
         """The file's first ``max_bytes`` bytes, or None if the candidate left no such file."""
 
-    def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult: ...
+    def run(self, argv: list[str], limits: Limits, env: dict[str, str], *, stdin: str | None = None,
+            full_stdout: bool = False) -> StepResult:
+        """Run one step. ``stdin`` names a file of this workspace to feed it (default: nothing,
+        /dev/null); ``full_stdout`` keeps its whole standard output, up to the output cap,
+        where by default only a diagnostic tail comes back. ``extra`` may carry
+        ``cpu_seconds`` and ``peak_memory_mb``."""
 
 
 class Sandbox(Protocol):

@@ -205,11 +205,12 @@ class DockerWorkspace:
         reply = self._perform({"op": "read", "name": name, "max_bytes": max_bytes}, CALL_SECONDS, None)
         return None if reply["data"] is None else base64.b64decode(reply["data"])
 
-    def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:
+    def run(self, argv: list[str], limits: Limits, env: dict[str, str], *, stdin: str | None = None,
+            full_stdout: bool = False) -> StepResult:
         merged = dict(ENV_BASE)
         merged.update(dict(self.needs.env))
         merged.update(env)
-        request = run_request(argv, merged, limits)
+        request = run_request(argv, merged, limits, stdin, full_stdout)
         started = time.monotonic()
         try:
             reply = self._perform(request, limits.wall_seconds + STEP_GRACE_SECONDS, limits)

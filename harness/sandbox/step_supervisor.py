@@ -122,17 +122,26 @@ class Supervisor:
     def op_run(self, req):
         limits = req["limits"]
         argv, env = req["argv"], req["env"]
+        stdin = subprocess.DEVNULL
+        if req.get("stdin"):  # a file of the work dir, read through no link, as read_regular_file
+            stdin = open_input_file(self.work, req["stdin"])
+            if stdin is None:
+                return {"spawn_error": "the step's input file %s is missing or not a regular file" % req["stdin"]}
         before = read_oom_kills(self.oom_files)
         started = time.monotonic()
         try:
             proc = subprocess.Popen(
-                argv, cwd=self.work, env=env, stdin=subprocess.DEVNULL, stdout=subprocess.PIPE,
+                argv, cwd=self.work, env=env, stdin=stdin, stdout=subprocess.PIPE,
                 stderr=subprocess.PIPE, start_new_session=True, close_fds=True,
                 preexec_fn=step_preexec(limits, req.get("rlimit_memory"), req.get("rlimit_processes")),
             )
         except OSError as exc:
             return {"spawn_error": "cannot start %s: %s" % (argv[0], exc)}
-        out, err, timed_out, flooded, left_running = collect(proc, limits, started, self.sweep)
+        finally:
+            if stdin is not subprocess.DEVNULL:
+                os.close(stdin)
+        full = bool(req.get("full_stdout"))
+        out, err, timed_out, flooded, left_running = collect(proc, limits, started, self.sweep, full)
         wall = time.monotonic() - started
         left_running += self.sweep()
         after = read_oom_kills(self.oom_files)
@@ -141,12 +150,14 @@ class Supervisor:
         return {
             "returncode": proc.returncode,
             "wall": round(wall, 4),
-            "stdout": base64.b64encode(out[-KEEP_BYTES:]).decode("ascii"),
+            # The whole output when asked (a program's answer; the output cap bounds it).
+            "stdout": base64.b64encode(out if full else out[-KEEP_BYTES:]).decode("ascii"),
             "stderr": base64.b64encode(err[-KEEP_BYTES:]).decode("ascii"),
             "timed_out": timed_out,
             "flooded": flooded,
             "oom_kills": None if before is None or after is None else after - before,
             "max_rss_kb": getattr(proc, "max_rss_kb", None),
+            "cpu": getattr(proc, "cpu_seconds", None),
             "left_running": left_running,
             "residue": residue[:20],
         }
@@ -198,8 +209,9 @@ def step_preexec(limits, rlimit_memory, rlimit_processes):
     return preexec
 
 
-def collect(proc, limits, started, kill_leftovers):
-    """Read both pipes until EOF, the wall-clock deadline or the output cap. When the step's
+def collect(proc, limits, started, kill_leftovers, full_stdout=False):
+    """Read both pipes until EOF, the wall-clock deadline or the output cap (``full_stdout``:
+    keep all of stdout, not only its tail). When the step's
     own process ends, whatever it started is killed (``kill_leftovers``, the supervisor's sweep), as bubblewrap's pid namespace
     ends with its first process: a detached child holding the pipes open cannot stretch the
     step. Returns the output, the two flags and how many processes were still running then."""
@@ -233,7 +245,10 @@ def collect(proc, limits, started, kill_leftovers):
                     selector.unregister(key.fileobj)
                     continue
                 total += len(chunk)
-                keep_tail(buffers[key.fileobj], chunk)
+                if full_stdout and key.fileobj is proc.stdout:
+                    buffers[proc.stdout] += chunk
+                else:
+                    keep_tail(buffers[key.fileobj], chunk)
                 if total > cap:
                     flooded = True
                     break
@@ -275,6 +290,7 @@ def reap_step(proc, timeout=None):
         if pid == proc.pid:
             proc.returncode = os.waitstatus_to_exitcode(status)
             proc.max_rss_kb = usage.ru_maxrss
+            proc.cpu_seconds = round(usage.ru_utime + usage.ru_stime, 4)
             return True
         if time.monotonic() >= deadline:
             return False
@@ -533,6 +549,26 @@ def write_new_file(root, name, data, owner=None):
         if owner is not None:
             os.fchown(fd, owner, owner)  # the file just made, by its descriptor
         handle.write(data)
+
+
+def open_input_file(root, name):
+    """A read-only descriptor for ``name`` under ``root`` if it is a regular file reached
+    through no link, else None: a step's standard input, written there by the harness."""
+    try:
+        folder, leaf = open_folder_of(root, name)
+    except (OSError, ValueError):
+        return None
+    try:
+        fd = os.open(leaf, os.O_RDONLY | os.O_NOFOLLOW | os.O_NONBLOCK | os.O_CLOEXEC, dir_fd=folder)
+    except OSError:
+        return None
+    finally:
+        os.close(folder)
+    if not stat.S_ISREG(os.fstat(fd).st_mode):
+        os.close(fd)
+        return None
+    os.set_blocking(fd, True)
+    return fd
 
 
 def read_regular_file(root, name, max_bytes):

@@ -273,8 +273,16 @@ class WarmPool:
 
 # --- reading the supervisor's replies ---------------------------------------------------------
 
-def run_request(argv: list[str], env: dict[str, str], limits: Limits, **options) -> dict:
-    return {"op": "run", "argv": list(argv), "env": env, "limits": limits.as_dict(), **options}
+def run_request(argv: list[str], env: dict[str, str], limits: Limits, stdin: str | None = None,
+                full_stdout: bool = False, **options) -> dict:
+    """A step for the supervisor; ``stdin`` names a work-dir file to feed it (else /dev/null),
+    ``full_stdout`` keeps all its output up to the cap rather than the diagnostic tail."""
+    request = {"op": "run", "argv": list(argv), "env": env, "limits": limits.as_dict(), **options}
+    if stdin is not None:
+        request["stdin"] = stdin
+    if full_stdout:
+        request["full_stdout"] = True
+    return request
 
 
 def read_run_reply(reply: dict, limits: Limits) -> tuple[StepResult, str | None]:
@@ -298,6 +306,8 @@ def read_run_reply(reply: dict, limits: Limits) -> tuple[StepResult, str | None]
         result.timed_out = True
     if code == -signal.SIGXFSZ:
         result.file_size_exceeded = True
+    if reply.get("cpu") is not None:  # user + system time of the step and what it waited for
+        result.extra["cpu_seconds"] = reply["cpu"]
     if reply.get("max_rss_kb") is not None:  # the backend may replace it with its cgroup's peak
         result.extra["peak_memory_mb"] = round(reply["max_rss_kb"] / 1024, 1)
     oom_kills = reply["oom_kills"]

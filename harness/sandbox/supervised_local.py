@@ -74,7 +74,8 @@ class SupervisedWorkspace(LocalWorkspace):
         self.slot = slot
         self.needs = needs
 
-    def run(self, argv: list[str], limits: Limits, env: dict[str, str]) -> StepResult:
+    def run(self, argv: list[str], limits: Limits, env: dict[str, str], *, stdin: str | None = None,
+            full_stdout: bool = False) -> StepResult:
         # A runtime command missing from the system is the machine's fault, not the candidate's.
         # (Programs the compile step builds, like ./main, are looked up by the kernel.)
         merged = self.sandbox.step_env(self.slot, self.needs, env)
@@ -87,7 +88,7 @@ class SupervisedWorkspace(LocalWorkspace):
         try:
             oom_before, baseline = self.sandbox.fit_limits(slot, limits)
             reply = slot.channel.call(
-                run_request(argv, merged, limits, rlimit_memory=group is None,
+                run_request(argv, merged, limits, stdin, full_stdout, rlimit_memory=group is None,
                             rlimit_processes=group is None or not group.limits_processes),
                 limits.wall_seconds + STEP_GRACE_SECONDS)
         except (SupervisorTrouble, OSError) as exc:
