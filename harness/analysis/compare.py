@@ -36,6 +36,10 @@ def compare_manifests(a: Run, b: Run) -> list[str]:
                         f"{str(sa.get('digest'))[:12]} vs {str(sb.get('digest'))[:12]})")
     if ma.get("mode") != mb.get("mode"):
         warnings.append(f"mode differs: {ma.get('mode')} vs {mb.get('mode')}")
+    # Runs made before extraction was recorded used the textual rules, what --extract strict keeps.
+    ea, eb = (m.get("extraction", "textual (not recorded)") for m in (ma, mb))
+    if ea != eb:
+        warnings.append(f"extraction policy differs: {ea} vs {eb}; the same text can become a different program")
     ra, rb = ma.get("runtimes") or {}, mb.get("runtimes") or {}
     for name in sorted(set(ra) ^ set(rb)):
         warnings.append(f"runtime {name} is only in {'A' if name in ra else 'B'}")

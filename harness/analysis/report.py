@@ -170,7 +170,7 @@ def _brief_row(row: dict) -> dict:
 
 def provenance(run: Run) -> dict:
     m = run.manifest
-    keep = ("label", "harness_version", "problem_set", "mode", "limit_overrides", "sandbox", "inputs",
+    keep = ("label", "harness_version", "problem_set", "mode", "extraction", "limit_overrides", "sandbox", "inputs",
             "started_at", "finished_at", "resumed_at", "host")
     result = {k: m[k] for k in keep if k in m}
     result["runtimes"] = {name: {"digest": info.get("digest"), "toolchain": info.get("toolchain"),

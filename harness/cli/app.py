@@ -6,7 +6,7 @@ from __future__ import annotations
 import typer
 
 from .. import __version__
-from . import analysis, problems, runtimes, sandbox, score
+from . import analysis, extract, problems, runtimes, sandbox, score
 
 app = typer.Typer(add_completion=False, no_args_is_help=True, help=(
     "Assay scores model-written code: prompts out, completion dumps in, every candidate run in a "
@@ -21,6 +21,7 @@ def version() -> None:
 
 
 score.register(app)
+extract.register(app)
 analysis.register(app)
 app.add_typer(problems.problems_app, name="problems")
 app.add_typer(runtimes.runtimes_app, name="runtimes")

@@ -10,6 +10,7 @@ from typing import List, Optional
 import typer
 
 from ..engine.completions import MODES
+from ..extraction import EXTRACTION_POLICIES
 from ..metrics import parse_ks
 from ..render.summary import pass_table
 from ..console import use_colour
@@ -68,8 +69,11 @@ def score(
                                             "(wall and CPU), overriding the runtimes' defaults."),
     memory: Optional[int] = typer.Option(None, "--memory", min=16, help="Memory limit in MB per candidate."),
     k: str = typer.Option("1,10,100", "--k", help="Comma-separated k values for pass@k."),
-    mode: str = typer.Option("continue", "--mode", help="continue: program = prompt + completion cut at stop "
-                             "sequences; whole: the completion is the whole function (fences stripped)."),
+    mode: str = typer.Option("continue", "--mode", help="continue: program = prompt + completion, ending where "
+                             "the function ends; whole: the completion holds the whole function (chat answers)."),
+    extract_policy: str = typer.Option("syntax", "--extract", help="How the program is taken from the text: "
+                                       "syntax (the runtime's grammar picks the function, its helpers and imports) "
+                                       "or strict (first fenced block; stop sequences)."),
     sandbox: str = typer.Option("bubblewrap", "--sandbox", help=f"Sandbox backend: {', '.join(backends())}."),
     label: Optional[str] = typer.Option(None, "--label", help="Checkpoint label recorded in the manifest."),
     repeat: int = typer.Option(1, "--repeat", min=1, help="Run each candidate N times; disagreeing "
@@ -92,6 +96,8 @@ def score(
 
     if mode not in MODES:
         fail(f"--mode must be one of: {', '.join(MODES)}")
+    if extract_policy not in EXTRACTION_POLICIES:
+        fail(f"--extract must be one of: {', '.join(EXTRACTION_POLICIES)}")
     try:
         where = engine_factory(engine, EngineOptions(jobs=jobs, address=address))
     except EngineError as exc:
@@ -108,7 +114,7 @@ def score(
     out = out or Path("results") / dumps[0].stem
     options = ScoreOptions(dumps=list(dumps), out=out, jobs=jobs, mode=mode, ks=ks,
                            limit_overrides=limit_overrides(timeout, memory), progress=not quiet, label=label,
-                           repeat=repeat, cache_dir=cache)
+                           repeat=repeat, cache_dir=cache, extract=extract_policy)
     with open_sandbox(sandbox) as box:
         try:
             outcome = run_score(options, problem_set, runtimes, box, engine_factory=where)

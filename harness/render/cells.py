@@ -95,6 +95,8 @@ def provenance_lines(prov: dict) -> list[tuple[str, str]]:
                                      f"digest {str(problem_set.get('digest'))[:12]}) at {problem_set.get('path')}"))
     if "mode" in prov:
         lines.append(("mode", prov["mode"]))
+    if "extraction" in prov:
+        lines.append(("extraction", prov["extraction"]))
     for name, info in prov.get("runtimes", {}).items():
         run_limits = (info.get("limits") or {}).get("run") or {}
         limits = ", ".join(f"{k}={v}" for k, v in run_limits.items())

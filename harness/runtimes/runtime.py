@@ -28,6 +28,9 @@ from .filters import (NAMING_STYLES, chunked, float_class, float_literal, indent
                       utf16_units)
 
 RUNTIME_FILE = "runtime.yaml"
+# The one template a runtime needs for whole-program problems: the continue-mode prompt (the
+# statement as a comment, then the language's usual start of a program).
+PROGRAM_TEMPLATE = "program_main.j2"
 # Toolchains are looked up on the PATH the sandbox sees, not the invoking user's.
 SANDBOX_PATH = "/usr/local/bin:/usr/bin:/bin"
 
@@ -37,11 +40,41 @@ class RuntimeConfigError(ValueError):
 
 
 @dataclass(frozen=True)
+class WarmCompile:
+    """How a compile step may skip a cold compiler start (``compile.warm`` in runtime.yaml):
+    ``server``, a long-lived compiler process started with ``command`` in a sandbox of its own,
+    fed the cold ``compile.command`` and the source (``files``, a folder of the runtime, is bound
+    read-only where ``{files}`` stands in ``command``); or ``precompiled_header``, the file
+    ``header`` of the runtime precompiled once per toolchain with ``build`` and used by
+    ``command`` (``{header}`` stands for its path). ``harness/sandbox/warm_compilers.py`` runs
+    them; every verdict must equal the cold command's."""
+
+    kind: str
+    command: tuple[str, ...]
+    files: str | None = None
+    header: str | None = None
+    build: tuple[str, ...] = ()
+
+
+@dataclass(frozen=True)
 class Step:
     """A compile or run step: the command (list of argv strings) and its limit overrides."""
 
     command: tuple[str, ...]
     limits: LimitOverrides = field(default_factory=LimitOverrides)
+    warm: WarmCompile | None = None
+
+
+@dataclass(frozen=True)
+class ProgramSetup:
+    """How a runtime builds and runs a whole program (problems of kind ``program``): runtime.yaml's
+    ``program:`` section, each field defaulting to the function kind's; ``stop_sequences`` end a
+    continuation of the program prompt."""
+
+    source_file: str
+    compile: Step | None
+    run: Step
+    stop_sequences: tuple[str, ...] = ()
 
 
 @dataclass
@@ -63,6 +96,7 @@ class Runtime:
     reserved_rename: str = "{name}_"
     unsupported_types: dict[str, str] = field(default_factory=dict)
     extraction: ExtractionSpec | None = None
+    program: ProgramSetup | None = None
 
     @cached_property
     def templates(self) -> jinja2.Environment:
@@ -102,13 +136,19 @@ class Runtime:
 
     def renamed(self, problem: Problem) -> list[tuple[str, str]]:
         """The (problem name, name in this language) pairs that reserved words forced apart."""
+        if problem.kind == "program":
+            return []
         names = [("function", problem.function)] + [("param", p.name) for p in problem.params]
         return [(snake, self.name_of(kind, snake)) for kind, snake in names
                 if recase(snake, self.naming.get(kind, "snake")) in self.reserved_words]
 
     def refusal(self, problem: Problem) -> str | None:
         """Why this runtime cannot pose ``problem`` (a declared type it has no counterpart
-        for), or None when it can."""
+        for, or no template for whole programs), or None when it can."""
+        if problem.kind == "program":
+            if not (self.path / PROGRAM_TEMPLATE).is_file():
+                return f"{self.name} has no {PROGRAM_TEMPLATE} template: it cannot pose whole-program problems ({problem.id})"
+            return None
         declared = [(f"parameter {p.name}", p.type) for p in problem.params] + [("the result", problem.returns)]
         for where, typ in declared:
             for part in typ.walk():
@@ -118,6 +158,8 @@ class Runtime:
         return None
 
     def context(self, problem: Problem) -> dict:
+        if problem.kind == "program":
+            return self.program_context(problem)
         return {
             "problem": problem,
             "function": self.name_of("function", problem.function),
@@ -132,6 +174,15 @@ class Runtime:
             "candidate_types": "",
         }
 
+    def program_context(self, problem) -> dict:
+        """What ``program_main.j2`` sees: the statement's lines and the example cases' lines."""
+        examples = []
+        for case in problem.examples:
+            given, expected = case.texts()
+            examples.append({"input_lines": given.splitlines(), "output_lines": expected.splitlines()})
+        return {"problem": problem, "title": problem.title, "description_lines": problem.description.splitlines(),
+                "examples": examples}
+
     def reference(self, problem: Problem) -> str | None:
         """The problem's reference in this language: from the problem set (its YAML or its
         ``references/<language>/`` folder), else from this runtime's own folder,
@@ -144,17 +195,26 @@ class Runtime:
         return found[0].read_text(encoding="utf-8") if found else None
 
     def reference_completion(self, problem: Problem) -> str:
-        """The problem's reference as a continuation of this runtime's prompt."""
+        """The problem's reference as a continuation of this runtime's prompt (a whole program's
+        reference is the program itself: it is judged in whole mode)."""
+        if problem.kind == "program":
+            text = self.reference(problem)
+            return text if text.endswith("\n") else text + "\n"
         return indent_lines(self.reference(problem), self.reference_indent) + "\n"
 
     def render_prompt(self, problem: Problem) -> str:
+        if problem.kind == "program":
+            return self.templates.get_template(PROGRAM_TEMPLATE).render(self.program_context(problem))
         return self.templates.get_template("prompt.j2").render(self.context(problem))
 
     def render_preamble(self, problem: Problem, candidate_imports: str = "", candidate_types: str = "") -> str:
         """What precedes a whole-function completion (imports, an enclosing class opener).
         ``candidate_imports`` and ``candidate_types`` are what extraction kept of the model's
         imports and of its top-level types; a template that names them places them where its
-        language requires, and :meth:`assemble_whole` puts them first for one that does not."""
+        language requires, and :meth:`assemble_whole` puts them first for one that does not.
+        A whole program has none: it is the program as the model wrote it."""
+        if problem.kind == "program":
+            return ""
         try:
             template = self.templates.get_template("preamble.j2")
         except jinja2.TemplateNotFound:
@@ -179,7 +239,7 @@ class Runtime:
         places = self.preamble_places
         preamble = self.render_preamble(problem, imports if "candidate_imports" in places else "",
                                         types if "candidate_types" in places else "")
-        head = "".join(part + "\n" for part in (
+        head = "".join(part + "\n\n" for part in (
             imports if "candidate_imports" not in places else "",
             types if "candidate_types" not in places else "") if part)
         return head + preamble + code
@@ -191,14 +251,16 @@ class Runtime:
         return self.templates.get_template("program.j2").render(context)
 
     def step_limits(self, kind: str, problem: LimitOverrides = LimitOverrides(),
-                    command_line: LimitOverrides = LimitOverrides()) -> Limits | None:
+                    command_line: LimitOverrides = LimitOverrides(), program: bool = False) -> Limits | None:
         """The limits of this runtime's ``compile`` or ``run`` step (None: no such step).
 
         The one place where layers meet, each overriding the ones before it: the engine's
         ``STEP_DEFAULTS[kind]`` < runtime.yaml's ``limits`` < the step's own ``limits`` < the
         problem's ``limits`` (run step only) < the command line (``--timeout``, ``--memory``).
+        With ``program``, the steps are those of whole programs (``program:`` in runtime.yaml).
         """
-        step = self.compile if kind == "compile" else self.run
+        steps = self.program if program else self
+        step = steps.compile if kind == "compile" else steps.run
         if step is None:
             return None
         layers = self.limits.then(step.limits)
@@ -267,7 +329,8 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
             return None
         if not isinstance(raw, dict) or not _str_list(raw.get("command")):
             raise fail(key, "expected a mapping with 'command': a list of strings")
-        return Step(tuple(raw["command"]), _limits(raw.get("limits"), lambda m: fail(f"{key}.limits", m)))
+        warm = _warm_compile(raw.get("warm"), path, lambda f, m: fail(f"{key}.warm{f}", m)) if key == "compile" else None
+        return Step(tuple(raw["command"]), _limits(raw.get("limits"), lambda m: fail(f"{key}.limits", m)), warm)
 
     run = step("run")
     if run is None:
@@ -345,11 +408,68 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
         reserved_rename=rename,
         unsupported_types=dict(unsupported),
         extraction=extraction,
+        program=_program_setup(data.get("program"), source_file, step("compile"), run,
+                               lambda f, m: fail("program" + f, m)),
     )
 
 
 def _str_list(value: object, allow_empty: bool = False) -> bool:
     return isinstance(value, list) and (allow_empty or value) and all(isinstance(v, str) for v in value)
+
+
+def _warm_compile(raw: object, folder: Path, fail) -> WarmCompile | None:
+    """``compile.warm``: one of ``server: {command, files}`` or ``precompiled_header: {header,
+    build, command}`` (docs/runtime-format.md)."""
+    if raw is None:
+        return None
+    if not isinstance(raw, dict) or len(raw) != 1 or next(iter(raw)) not in ("server", "precompiled_header"):
+        raise fail("", "expected a mapping with one key, 'server' or 'precompiled_header'")
+    kind, spec = next(iter(raw.items()))
+    if not isinstance(spec, dict) or not _str_list(spec.get("command")):
+        raise fail(f".{kind}.command", "expected a list of strings")
+    known = {"server": {"command", "files"}, "precompiled_header": {"command", "header", "build"}}[kind]
+    if set(spec) - known:
+        raise fail(f".{kind}", f"unknown field(s) {', '.join(sorted(set(spec) - known))}")
+    for name in known - {"command", "build"}:
+        value = spec.get(name)
+        if not isinstance(value, str) or not value or value.startswith("/") or ".." in Path(value).parts:
+            raise fail(f".{kind}.{name}", "expected a path inside the runtime folder")
+        if not (folder / value).exists():
+            raise fail(f".{kind}.{name}", f"{folder / value} does not exist")
+    if kind == "precompiled_header" and not _str_list(spec.get("build")):
+        raise fail(f".{kind}.build", "expected a list of strings")
+    return WarmCompile(kind, tuple(spec["command"]), spec.get("files"), spec.get("header"),
+                       tuple(spec.get("build") or ()))
+
+
+def _program_setup(raw: object, source_file: str, compile_step: Step | None, run: Step, fail) -> ProgramSetup:
+    """runtime.yaml's ``program:`` section (see docs/runtime-format.md); what it leaves out is the
+    function kind's. ``compile: null`` means a whole program has no compile step."""
+    if raw is None:
+        return ProgramSetup(source_file, compile_step, run)
+    if not isinstance(raw, dict):
+        raise fail("", "expected a mapping with source_file, compile, run and/or stop_sequences")
+    unknown = set(raw) - {"source_file", "compile", "run", "stop_sequences"}
+    if unknown:
+        raise fail("", f"unknown field(s) {', '.join(sorted(map(str, unknown)))}")
+    source = raw.get("source_file", source_file)
+    if not isinstance(source, str) or not source or "/" in source:
+        raise fail(".source_file", "expected a plain file name such as Main.java")
+
+    def program_step(key: str, default: Step | None) -> Step | None:
+        if key not in raw:
+            return default
+        value = raw[key]
+        if value is None and key == "compile":
+            return None
+        if not isinstance(value, dict) or not _str_list(value.get("command")):
+            raise fail(f".{key}", "expected a mapping with 'command': a list of strings")
+        return Step(tuple(value["command"]), _limits(value.get("limits"), lambda m: fail(f".{key}.limits", m)))
+
+    stops = raw.get("stop_sequences", [])
+    if not _str_list(stops, allow_empty=True):
+        raise fail(".stop_sequences", "expected a list of strings")
+    return ProgramSetup(source, program_step("compile", compile_step), program_step("run", run), tuple(stops))
 
 
 def _limits(raw: object, fail) -> LimitOverrides:
