@@ -150,7 +150,7 @@ def _read(request: ExtractionRequest, text: str, where: str, tagged: bool) -> _R
             found, found_exact = _target(request, members)
             if found is not None:
                 index = items.index(wrapper)
-                items = items[:index] + [Item("wrapper", wrapper.node, wrapper.inner, "", wrapper.name)] \
+                items = items[:index] + [Item("wrapper", wrapper.node, wrapper.inner, "", wrapper.name, source)] \
                     + members + items[index + 1:]
                 target, exact = found, found_exact
                 break

@@ -10,7 +10,7 @@ import importlib
 import re
 import threading
 from dataclasses import dataclass, field
-from functools import lru_cache
+from functools import cached_property, lru_cache
 
 import tree_sitter
 
@@ -48,19 +48,24 @@ def parse(spec: ExtractionSpec, source: bytes) -> tree_sitter.Tree:
     return parser.parse(source)
 
 
-@dataclass
+@dataclass(eq=False)
 class Item:
-    """A top-level piece of a source file (or a member of an unwrapped class)."""
+    """A top-level piece of a source file (or a member of an unwrapped class). The names it
+    mentions are read only when asked for: most items are dropped unread."""
 
     kind: str  # function | definition | import | other
     node: tree_sitter.Node
     inner: tree_sitter.Node
     text: str
     name: str | None = None
-    refs: frozenset[str] = frozenset()
+    source: bytes = b""
     params: tuple[int, float] | None = None  # (required, most); None: not declared
     wrapped: bool = False
     bound: frozenset[str] = field(default_factory=frozenset)
+
+    @cached_property
+    def refs(self) -> frozenset[str]:
+        return words(self.source, self.node) if self.source else frozenset()
 
     @property
     def label(self) -> str:
@@ -79,16 +84,16 @@ def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped
     inner = _unwrap_transparent(spec, node)
     text = node_text(source, node)
     if node.type in spec.imports or inner.type in spec.imports:
-        return Item("import", node, inner, text, refs=words(source, node), wrapped=wrapped,
+        return Item("import", node, inner, text, source=source, wrapped=wrapped,
                     bound=frozenset(import_names(spec, source, inner)))
     if inner.type in spec.functions or inner.type in spec.definitions:
         kind = "function" if inner.type in spec.functions else "definition"
         name = definition_name(source, inner, spec.definitions.get(inner.type))
         if name is None:  # `print(x)` is an expression statement, like `LIMIT = 3`
-            return Item("other", node, inner, text, refs=words(source, node), wrapped=wrapped)
+            return Item("other", node, inner, text, source=source, wrapped=wrapped)
         params = parameter_range(spec, inner) if kind == "function" else None
-        return Item(kind, node, inner, text, name, words(source, node), params, wrapped)
-    return Item("other", node, inner, text, refs=words(source, node), wrapped=wrapped)
+        return Item(kind, node, inner, text, name, source, params, wrapped)
+    return Item("other", node, inner, text, source=source, wrapped=wrapped)
 
 
 def _unwrap_transparent(spec: ExtractionSpec, node: tree_sitter.Node) -> tree_sitter.Node:
