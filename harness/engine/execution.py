@@ -22,6 +22,8 @@ from ..runtimes import Runtime
 from ..vocabulary import LimitOverrides, Limits, StepResult, Verdict
 from ..sandbox.base import Sandbox
 from ..problems.types import JsonObject, loads_reported, show, values_equal
+from .programs import (ProgramOptions, checker_runtime_for, limit_note, program_extraction, program_limits,
+                       program_verdict, run_program)
 
 DETAIL_CHARS = 500
 RESULTS_MAX_BYTES = 4 * 1024 * 1024
@@ -41,8 +43,11 @@ class Executor:
         infra_retries: int = 3,
         retry_backoff: float = 0.5,
         extract_policy: str = "syntax",
+        programs: ProgramOptions | None = None,
     ):
         self.extract_policy = extract_policy
+        self.programs = programs or ProgramOptions()  # how problems of kind program run
+        self._checker_runtimes: dict[str, Runtime] = {}
         self._extraction = lru_cache(maxsize=4096)(self._extract_uncached)
         self.sandbox = sandbox
         self.repeat = repeat
@@ -63,6 +68,8 @@ class Executor:
     def limits_for(self, runtime: Runtime, problem: Problem) -> tuple[Limits | None, Limits]:
         """(compile limits or None, run limits) of ``problem`` in ``runtime``: see
         ``Runtime.step_limits`` for how the layers combine."""
+        if problem.kind == "program":
+            return program_limits(runtime, problem, self.limit_overrides)
         return (runtime.step_limits("compile"),
                 runtime.step_limits("run", problem.limits, self.limit_overrides))
 
@@ -72,6 +79,9 @@ class Executor:
 
     def _extract_uncached(self, problem_id: str, language: str, completion: str) -> Extraction:
         prompt, preamble = self._prompt(problem_id, language)
+        if self.problems.problems[problem_id].kind == "program":  # extraction decides per kind here
+            return program_extraction(self.programs.mode or self.mode, self.runtimes[language], prompt, completion,
+                                      self.extract_policy)
         request = extraction_request(self.mode, self.runtimes[language], self.problems.problems[problem_id],
                                      prompt, preamble, completion, self.extract_policy)
         return extract(request)
@@ -79,6 +89,8 @@ class Executor:
     def code(self, sample: Sample) -> str:
         """The candidate's source before the driver: what the model's text amounts to."""
         _, preamble = self._prompt(sample.problem, sample.language)
+        if self.problems.problems[sample.problem].kind == "program":
+            return self.extraction(sample).code  # the program as the model wrote it, no driver
         return assemble_code(self.runtimes[sample.language], self.problems.problems[sample.problem],
                              self.mode, self.extraction(sample), preamble)
 
@@ -98,9 +110,13 @@ class Executor:
     def _key_prefix_uncached(self, language: str, problem_id: str):
         runtime = self.runtimes[language]
         compile_limits, run_limits = self.limits_for(runtime, self.problems.problems[problem_id])
-        identity = json.dumps([runtime.digest, self.problems.digest, problem_id, self.repeat,
-                               compile_limits.as_dict() if compile_limits else None, run_limits.as_dict()])
-        return hashlib.sha256(identity.encode())
+        identity = [runtime.digest, self.problems.digest, problem_id, self.repeat,
+                    compile_limits.as_dict() if compile_limits else None, run_limits.as_dict()]
+        problem = self.problems.problems[problem_id]
+        if problem.kind == "program":  # what else decides its verdict: all cases or not, the checker's runtime
+            checker = checker_runtime_for(problem, self.runtimes, self._checker_runtimes)
+            identity += [self.programs.all_cases, checker.digest if checker else None]
+        return hashlib.sha256(json.dumps(identity).encode())
 
     def judge_sample(self, sample: Sample) -> Verdict:
         """The verdict to record: infra errors retried with backoff; with ``repeat`` > 1 the
@@ -127,6 +143,8 @@ class Executor:
         started = time.monotonic()
         runtime = self.runtimes[sample.language]
         problem = self.problems.problems[sample.problem]
+        if problem.kind == "program":
+            return self._execute_program(sample, runtime, problem, started)
         total = len(problem.cases)
         nonce = secrets.token_hex(16)
         results_file = f".results-{nonce[:12]}.jsonl"
@@ -159,6 +177,24 @@ class Executor:
         verdict.compile_seconds, verdict.run_seconds = compile_seconds, round(ran.wall_seconds, 4)
         if "peak_memory_mb" in ran.extra:
             verdict.extra["peak_memory_mb"] = ran.extra["peak_memory_mb"]
+        return verdict
+
+    def _execute_program(self, sample: Sample, runtime: Runtime, problem, started: float) -> Verdict:
+        """A whole program, case by case (``programs.py``)."""
+        total = len(problem.cases)
+        try:
+            source = self.code(sample)
+            checker = checker_runtime_for(problem, self.runtimes, self._checker_runtimes)
+        except Exception as exc:  # a template or runtime folder bug, never the candidate's fault
+            return Verdict("infra_error", 0, total, 0.0, _clip(f"preparing the program failed: {exc}"))
+        try:
+            ran = run_program(self.sandbox, runtime, problem, source, self.limits_for(runtime, problem),
+                              self.programs.all_cases, checker,
+                              limit_note(problem, runtime.name, self.limit_overrides))
+        except Exception as exc:  # the sandbox itself broke: not the candidate's fault
+            return Verdict("infra_error", 0, total, _since(started), _clip(f"sandbox failure: {exc}"))
+        verdict = program_verdict(ran, total)
+        verdict.seconds = _since(started)
         return verdict
 
 
