@@ -196,3 +196,52 @@ def test_a_grammar_that_is_not_installed_falls_back_and_says_which(core):
     request = ExtractionRequest("whole", "```\ndef f(): pass\n```", "", "", "f", 0, (), spec)
     done = extract(request)
     assert done.record["method"] == "first_block" and "tree_sitter_no_such_language" in done.record["why"]
+
+
+# --- grammar data beyond Python's: imports that are calls, terminators beside a statement,
+# --- names at the end of a path, varargs (each spec below is inline, not a runtime's) -----------
+
+def _whole(spec_fields: dict, function: str, params: int, answer: str, preamble: str = ""):
+    spec = parse_extraction_spec(spec_fields)
+    return extract(ExtractionRequest("whole", answer, "", preamble, function, params, (), spec))
+
+
+def test_an_import_may_be_a_call_known_by_its_first_word():
+    # Ruby's require is an ordinary method call (Kernel#require, Ruby's core documentation; from
+    # memory): only calls that start with it are imports, other top-level calls are dropped.
+    spec = {"grammar": "tree_sitter_ruby", "functions": ["method"], "imports": {"call": ["require"]}}
+    done = _whole(spec, "f", 1, 'require "prime"\nputs f(3)\n\ndef f(n)\n  Prime.first(n)\nend\n')
+    assert done.imports == 'require "prime"' and "puts" not in done.code
+    assert done.record["dropped"] == ["puts f(3)"]
+    with pytest.raises(ExtractionSpecError, match="'imports'"):
+        parse_extraction_spec({"grammar": "g", "functions": ["f"], "imports": {"call": "require"}})
+
+
+def test_a_terminator_the_grammar_leaves_beside_a_statement_stays_with_it():
+    # Perl: "Every simple statement must be terminated with a semicolon" (perlsyn, "Simple
+    # Statements"; from memory). tree-sitter-perl puts that `;` beside the statement.
+    spec = {"grammar": "tree_sitter_perl", "functions": ["subroutine_declaration_statement"],
+            "definitions": {"expression_statement": "variable_declaration | assignment_expression/left"}}
+    answer = "my %memo;\nour $depth = 2;\nsub f {\n    return $memo{$_[0]} // $depth;\n}\n"
+    done = _whole(spec, "f", 1, answer)
+    assert done.code == "my %memo;\n\nour $depth = 2;\n\nsub f {\n    return $memo{$_[0]} // $depth;\n}\n"
+
+
+def test_a_definition_is_named_at_the_end_of_a_path_of_fields_or_node_types():
+    # PHP: `const NAME = value;` at the top level defines a constant (PHP manual, "Constants",
+    # "Syntax"; from memory); the grammar's const_element has no name field.
+    spec = {"grammar": {"module": "tree_sitter_php", "function": "language_php"},
+            "functions": ["function_definition"], "definitions": {"const_declaration": "const_element/name"}}
+    answer = "<?php\nconst LIMIT = 3;\nconst OTHER = 4;\nfunction f(int $n): int { return min($n, LIMIT); }\n"
+    done = _whole(spec, "f", 1, answer)
+    assert done.record["kept"] == ["definition LIMIT", "function f"] and "definition OTHER" in done.record["dropped"]
+
+
+def test_a_vararg_parameter_takes_any_number_of_arguments():
+    # Lua 5.4 manual, 3.4.11 "Function Definitions": `...` after the fixed parameters collects
+    # the extra arguments. The version with two fixed parameters cannot take one argument.
+    spec = {"grammar": "tree_sitter_lua", "functions": ["function_declaration"]}
+    answer = ("```lua\nfunction f(a, ...)\n  return a\nend\n```\n"
+              "```lua\nfunction f(a, b)\n  return b\nend\n```")
+    done = _whole(spec, "f", 1, answer)
+    assert "return a" in done.code and done.record["source"] == "block 1 of 2 (lua)"

@@ -16,15 +16,18 @@ class ExtractionSpecError(ValueError):
 @dataclass(frozen=True, eq=False)
 class ExtractionSpec:
     """How one language's answers are read. ``definitions`` maps a node type to the field that
-    names it (None: the usual ``name``/``declarator`` chain). ``wrappers`` maps a container type
-    (a class the runtime's template supplies itself) to the field holding its members."""
+    names it (None: the usual ``name``/``declarator`` chain; ``a/b`` a path of fields or child
+    node types; ``p | q`` alternatives, the first that leads somewhere wins). ``imports`` maps a
+    node type to the first words that make it an import (None: any), for grammars where an
+    import is an ordinary call (``require "set"``). ``wrappers`` maps a container type (a class
+    the runtime's template supplies itself) to the field holding its members."""
 
     grammar: str
     grammar_function: str = "language"
     tags: tuple[str, ...] = ()
     functions: frozenset[str] = frozenset()
     definitions: dict[str, str | None] = field(default_factory=dict)
-    imports: frozenset[str] = frozenset()
+    imports: dict[str, frozenset[str] | None] = field(default_factory=dict)
     transparent: frozenset[str] = frozenset()
     wrappers: dict[str, str] = field(default_factory=dict)
     entry_points: frozenset[str] = frozenset({"main"})
@@ -72,6 +75,18 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
                                       + (" (or a list of node types)" if allow_none else ""))
         return dict(value)
 
+    def word_mapping(key: str) -> dict[str, list[str] | None]:
+        value = raw.get(key, {}) or {}
+        if isinstance(value, list) and all(isinstance(v, str) and v for v in value):
+            return {v: None for v in value}
+        if not isinstance(value, dict) or not all(
+                isinstance(k, str) and k and (v is None or (isinstance(v, list) and v
+                                                            and all(isinstance(w, str) and w for w in v)))
+                for k, v in value.items()):
+            raise ExtractionSpecError(f"'{key}': expected a list of node types, or a mapping of node type "
+                                      "to the list of first words that qualify it (null: any)")
+        return dict(value)
+
     def choice(key: str, options: tuple[str, ...], default: str) -> str:
         value = raw.get(key, default)
         if value not in options:
@@ -88,7 +103,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         tags=tuple(t.lower() for t in names("tags")),
         functions=frozenset(functions),
         definitions=mapping("definitions", allow_none=True),
-        imports=frozenset(names("imports")),
+        imports={k: (frozenset(v) if v is not None else None) for k, v in word_mapping("imports").items()},
         transparent=frozenset(names("transparent")),
         wrappers={k: v for k, v in wrappers.items()},
         entry_points=frozenset(names("entry_points", ["main"])),

@@ -17,6 +17,8 @@ import tree_sitter
 from .spec import ExtractionSpec
 
 _WORD = re.compile(r"[^\W\d]\w*|\$\w+", re.UNICODE)
+_FIRST_WORD = re.compile(rb"\s*([A-Za-z_]\w*)")
+_PUNCTUATION = re.compile(rb";+")
 _local = threading.local()
 MAX_DEPTH = 12
 
@@ -82,8 +84,8 @@ def items_of(spec: ExtractionSpec, source: bytes, container: tree_sitter.Node, w
 
 def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped: bool = False) -> Item:
     inner = _unwrap_transparent(spec, node)
-    text = node_text(source, node)
-    if node.type in spec.imports or inner.type in spec.imports:
+    text = node_text(source, node) + _trailing_punctuation(source, node)
+    if _is_import(spec, source, node) or (inner is not node and _is_import(spec, source, inner)):
         return Item("import", node, inner, text, source=source, wrapped=wrapped,
                     bound=frozenset(import_names(spec, source, inner)))
     if inner.type in spec.functions or inner.type in spec.definitions:
@@ -94,6 +96,29 @@ def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped
         params = parameter_range(spec, inner) if kind == "function" else None
         return Item(kind, node, inner, text, name, source, params, wrapped)
     return Item("other", node, inner, text, source=source, wrapped=wrapped)
+
+
+def _is_import(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node) -> bool:
+    if node.type not in spec.imports:
+        return False
+    first_words = spec.imports[node.type]
+    if first_words is None:
+        return True
+    first = _FIRST_WORD.match(source, node.start_byte, node.end_byte)
+    return first is not None and first.group(1).decode("utf-8", "replace") in first_words
+
+
+def _trailing_punctuation(source: bytes, node: tree_sitter.Node) -> str:
+    """Some grammars leave a statement's terminator beside it rather than inside it (``;``
+    after ``my %seen`` or after ``struct S {...}``): anonymous punctuation tokens that follow
+    the node on the line where it ends belong to its text."""
+    end = node.end_byte
+    sibling = node.next_sibling
+    while (sibling is not None and not sibling.is_named and sibling.start_point[0] == node.end_point[0]
+           and _PUNCTUATION.fullmatch(source, sibling.start_byte, sibling.end_byte)):
+        end = sibling.end_byte
+        sibling = sibling.next_sibling
+    return source[node.end_byte:end].decode("utf-8", "replace")
 
 
 def _unwrap_transparent(spec: ExtractionSpec, node: tree_sitter.Node) -> tree_sitter.Node:
@@ -138,8 +163,11 @@ def definition_name(source: bytes, node: tree_sitter.Node, field_hint: str | Non
     """Follow ``name``/``declarator`` fields (C's declarators nest: ``int *f(...)``) down to
     the identifier that names a definition."""
     if field_hint:
-        named = node.child_by_field_name(field_hint)
-        return _leaf_name(source, named) if named is not None else None
+        for path in field_hint.split("|"):
+            named = _follow(node, path.strip())
+            if named is not None:
+                return _leaf_name(source, named)
+        return None
     current = node
     for _ in range(MAX_DEPTH):
         child = current.child_by_field_name("name") or current.child_by_field_name("declarator")
@@ -154,6 +182,17 @@ def definition_name(source: bytes, node: tree_sitter.Node, field_hint: str | Non
             return _leaf_name(source, child)
         current = child
     return None
+
+
+def _follow(node: tree_sitter.Node, path: str) -> tree_sitter.Node | None:
+    """Walk ``a/b/c``: each step is a field of the current node, else its first named child
+    of that node type."""
+    for step in path.split("/"):
+        found = node.child_by_field_name(step) or next((c for c in node.named_children if c.type == step), None)
+        if found is None:
+            return None
+        node = found
+    return node
 
 
 def _leaf_name(source: bytes, node: tree_sitter.Node) -> str | None:
@@ -176,7 +215,7 @@ def parameter_range(spec: ExtractionSpec, node: tree_sitter.Node) -> tuple[int, 
             continue
         names = len(child.children_by_field_name("name"))
         count = names if names > 1 else 1
-        if any(word in kind for word in ("splat", "variadic", "rest", "spread", "dictionary")):
+        if any(word in kind for word in ("splat", "variadic", "vararg", "rest", "spread", "dictionary")):
             most = float("inf")
             continue
         optional = (any(word in kind for word in ("default", "optional"))
