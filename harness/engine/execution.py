@@ -21,6 +21,7 @@ from ..problems import Problem, ProblemSet
 from ..runtimes import Runtime
 from ..vocabulary import LimitOverrides, Limits, StepResult, Verdict
 from ..sandbox.base import Sandbox
+from ..sandbox.warm_compilers import ColdCompiler, Compiler, enabled_by_default, warm_compilers
 from ..problems.types import JsonObject, loads_reported, show, values_equal
 from .programs import (ProgramOptions, checker_runtime_for, limit_note, program_extraction, program_limits,
                        program_verdict, run_program)
@@ -44,7 +45,11 @@ class Executor:
         retry_backoff: float = 0.5,
         extract_policy: str = "syntax",
         programs: ProgramOptions | None = None,
+        warm: bool | None = None,
     ):
+        # Warm compilers (runtime.yaml's compile.warm): on unless warm=False or ASSAY_WARM_COMPILERS=off.
+        on = enabled_by_default() if warm is None else warm
+        self.compilers = warm_compilers(sandbox) if on and sandbox is not None else None
         self.extract_policy = extract_policy
         self.programs = programs or ProgramOptions()  # how problems of kind program run
         self._checker_runtimes: dict[str, Runtime] = {}
@@ -155,10 +160,11 @@ class Executor:
         compile_limits, run_limits = self.limits_for(runtime, problem)
         compile_seconds = 0.0
         try:
-            with self.sandbox.workspace(runtime.needs) as space:
+            compiler = self.compiler_for(runtime, compile_limits)
+            with self.sandbox.workspace(compiler.needs) as space:
                 space.write(runtime.source_file, source)
                 if runtime.compile:
-                    built = space.run(list(runtime.compile.command), compile_limits, {})
+                    built = compiler.compile(space, runtime.source_file, source, compile_limits)
                     compile_seconds = round(built.wall_seconds, 4)
                     failed = _compile_failure(built, compile_limits, total, started)
                     if failed:
@@ -196,6 +202,13 @@ class Executor:
         verdict = program_verdict(ran, total)
         verdict.seconds = _since(started)
         return verdict
+
+    def compiler_for(self, runtime: Runtime, limits: Limits | None) -> Compiler:
+        """How ``runtime`` compiles here: its warm compiler when it declares one and this
+        sandbox backend runs it, else the cold command (harness/sandbox/warm_compilers.py)."""
+        if runtime.compile is None or self.compilers is None:
+            return ColdCompiler(runtime.needs, tuple(runtime.compile.command) if runtime.compile else ())
+        return self.compilers.prepare(runtime, limits)
 
 
 def _since(started: float) -> float:
