@@ -46,16 +46,21 @@ class Settings:
 @dataclass(frozen=True)
 class Group:
     name: str
-    kind: str  # language | overall | difficulty | tag
+    kind: str  # language | overall | kind (of problem: function, program) | difficulty | tag
     pairs: tuple[tuple[str, str], ...]
 
 
 def groups(run_problems: dict[str, dict], pairs, tags: bool = True) -> list[Group]:
-    """Languages, overall, then (when ``tags``) difficulty levels and topic tags."""
+    """Languages, overall, the kinds of problem when the run has both (function, program), then
+    (when ``tags``) difficulty levels and topic tags."""
     pairs = sorted(pairs)
     result = [Group(lang, "language", tuple(p for p in pairs if p[1] == lang))
               for lang in sorted({lang for _, lang in pairs})]
     result.append(Group("overall", "overall", tuple(pairs)))
+    kind_of = {p: run_problems.get(p[0], {}).get("kind", "function") for p in pairs}
+    if len(set(kind_of.values())) > 1:
+        for kind in sorted(set(kind_of.values())):
+            result.append(Group(kind, "kind", tuple(p for p in pairs if kind_of[p] == kind)))
     if tags and run_problems:
         levels = ("easy", "medium", "hard")
         found = {run_problems[p]["difficulty"] for p, _ in pairs if p in run_problems}

@@ -57,5 +57,8 @@ def build_trend(runs: list[Run], settings: Settings, labels: list[str] | None = 
         run = entry["run"]
         rows = {g.name: group_row(run, g, settings) for g in groups(run.problems, run.outcomes, tags=False)}
         points.append({"label": entry["label"], "step": entry["step"], "path": str(run.path), "groups": rows})
-    return {"settings": settings.as_dict(), "languages": languages, "points": points, "warnings": warnings,
+    # The kinds of problem (function, program) get a series each when a run has both.
+    kinds = sorted({name for p in points for name, row in p["groups"].items() if row["kind"] == "kind"})
+    return {"settings": settings.as_dict(), "languages": languages, "kinds": kinds, "points": points,
+            "warnings": warnings,
             "marks": MARKS}

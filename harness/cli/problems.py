@@ -76,6 +76,8 @@ def problems_calibrate(
     from ..problems import ProblemError
 
     problem_set = load_set(set_name)
+    if problem_set.parts:
+        fail("calibrate one set at a time: the limits are written into the set's own folder")
     if not any(p.kind == "program" for p in problem_set.problems.values()):
         fail(f"{problem_set.path}: no program problems to calibrate")
     names = lang or [name for name in available_runtimes(runtimes_dir)]

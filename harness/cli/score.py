@@ -48,8 +48,10 @@ def prompts(
                 row = {
                     "problem": problem.id,
                     "language": runtime.name,
+                    "kind": problem.kind,  # function: complete the function; program: a whole stdin/stdout program
                     "prompt": runtime.render_prompt(problem),
-                    "stop_sequences": list(runtime.stop_sequences),
+                    "stop_sequences": list(runtime.program.stop_sequences if problem.kind == "program"
+                                           else runtime.stop_sequences),
                     "whole_function_preamble": runtime.render_preamble(problem),
                 }
                 handle.write(json.dumps(row, ensure_ascii=False) + "\n")
@@ -62,7 +64,8 @@ def prompts(
 
 def score(
     dumps: List[Path] = typer.Argument(..., help="Completion dump(s), JSONL: problem, language, completion[, sample]."),
-    set_name: str = typer.Option("core", "--set", help="Bundled set name or path to a folder of problems."),
+    set_name: str = typer.Option("core", "--set", help="Bundled set name or path to a folder of problems; "
+                                 "several, comma-separated, score as one (core,dockside)."),
     out: Optional[Path] = typer.Option(None, "--out", help="Output folder (default: results/<first dump's name>)."),
     jobs: int = typer.Option(2, "--jobs", "-j", min=1, help="Candidates run at once."),
     timeout: Optional[float] = typer.Option(None, "--timeout", min=0.1, help="Run-step time limit in seconds "
@@ -74,6 +77,11 @@ def score(
     extract_policy: str = typer.Option("syntax", "--extract", help="How the program is taken from the text: "
                                        "syntax (the runtime's grammar picks the function, its helpers and imports) "
                                        "or strict (first fenced block; stop sequences)."),
+    program_mode: Optional[str] = typer.Option(None, "--program-mode", help="--mode for whole-program problems "
+                                               "(kind: program) when it differs; continue: prompt + completion; "
+                                               "whole: the completion is the program. Default: --mode."),
+    all_cases: bool = typer.Option(False, "--all-cases", help="Whole-program problems: run every case even after "
+                                   "one fails (default: stop at the first failing case)."),
     sandbox: str = typer.Option("bubblewrap", "--sandbox", help=f"Sandbox backend: {', '.join(backends())}."),
     label: Optional[str] = typer.Option(None, "--label", help="Checkpoint label recorded in the manifest."),
     repeat: int = typer.Option(1, "--repeat", min=1, help="Run each candidate N times; disagreeing "
@@ -94,8 +102,12 @@ def score(
     from ..engine.scoring import ScoreOptions
     from ..engine.scoring import score as run_score
 
+    from ..engine.programs import ProgramOptions
+
     if mode not in MODES:
         fail(f"--mode must be one of: {', '.join(MODES)}")
+    if program_mode is not None and program_mode not in MODES:
+        fail(f"--program-mode must be one of: {', '.join(MODES)}")
     if extract_policy not in EXTRACTION_POLICIES:
         fail(f"--extract must be one of: {', '.join(EXTRACTION_POLICIES)}")
     try:
@@ -114,7 +126,8 @@ def score(
     out = out or Path("results") / dumps[0].stem
     options = ScoreOptions(dumps=list(dumps), out=out, jobs=jobs, mode=mode, ks=ks,
                            limit_overrides=limit_overrides(timeout, memory), progress=not quiet, label=label,
-                           repeat=repeat, cache_dir=cache, extract=extract_policy)
+                           repeat=repeat, cache_dir=cache, extract=extract_policy,
+                           programs=ProgramOptions(mode=program_mode, all_cases=all_cases))
     with open_sandbox(sandbox) as box:
         try:
             outcome = run_score(options, problem_set, runtimes, box, engine_factory=where)

@@ -14,6 +14,7 @@ from typing import Callable, Iterator, Protocol
 
 from ..vocabulary import LimitOverrides, Sample, Verdict
 from .execution import Executor
+from .programs import ProgramOptions
 
 Job = tuple[str, Sample]
 
@@ -29,6 +30,7 @@ class ExecutorSpec:
     mode: str = "continue"
     limit_overrides: LimitOverrides = field(default_factory=LimitOverrides)
     repeat: int = 1
+    programs: ProgramOptions = field(default_factory=ProgramOptions)
 
     def build(self):
         """(executor, sandbox); the caller closes the sandbox when done."""
@@ -41,7 +43,8 @@ class ExecutorSpec:
         runtimes = {name: load_runtime(name, extra) for name in self.runtimes}
         sandbox = make_sandbox(self.sandbox)
         sandbox.check()
-        executor = Executor(sandbox, problems, runtimes, self.mode, self.limit_overrides, repeat=self.repeat)
+        executor = Executor(sandbox, problems, runtimes, self.mode, self.limit_overrides, repeat=self.repeat,
+                            programs=self.programs)
         return executor, sandbox
 
 

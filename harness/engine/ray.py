@@ -78,7 +78,8 @@ def spec_for(executor: Executor) -> ExecutorSpec:
             runtime_dirs.append(str(parent))
     return ExecutorSpec(problem_set=problem_set, runtimes=tuple(sorted(executor.runtimes)),
                         runtime_dirs=tuple(runtime_dirs), sandbox=executor.sandbox.name, mode=executor.mode,
-                        limit_overrides=executor.limit_overrides, repeat=executor.repeat)
+                        limit_overrides=executor.limit_overrides, repeat=executor.repeat,
+                        programs=executor.programs)
 
 
 def identity_of(executor: Executor) -> Identity:

@@ -18,6 +18,7 @@ from .completions import MAX_COMPLETION_BYTES, read_dumps
 from .engines import LocalEngine
 from ..vocabulary import LimitOverrides, Verdict
 from .execution import Executor
+from .programs import ProgramOptions
 from ..metrics import summarize
 from ..problems import ProblemSet
 from ..console import Progress
@@ -43,6 +44,7 @@ class ScoreOptions:
     repeat: int = 1
     cache_dir: Path | None = None
     extract: str = "syntax"
+    programs: ProgramOptions = field(default_factory=ProgramOptions)  # kind program: mode, all cases
 
     def __post_init__(self) -> None:
         self.limit_overrides = LimitOverrides.parse(self.limit_overrides)
@@ -105,17 +107,28 @@ def build_manifest(options: ScoreOptions, problems: ProblemSet, runtimes: dict[s
         "limit_overrides": options.limit_overrides.set_fields(),
         "repeat": options.repeat,
         "host": {"python": platform.python_version(), "platform": platform.platform()},
+        **program_facts(options, problems, runtimes),
     }
 
 
-IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "extraction", "limit_overrides", "repeat")
+def program_facts(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runtime]) -> dict:
+    """For a set with program problems: how they run (``programs``, part of the run's identity)
+    and where each language's time limits come from."""
+    ids = [pid for pid, kind in problems.kinds.items() if kind == "program"]
+    if not ids:
+        return {}
+    sources = {name: sorted({problems.problems[pid].limit_source(name) for pid in ids}) for name in sorted(runtimes)}
+    return {"programs": dict(options.programs.describe(options.mode), problems=len(ids), time_limits=sources)}
+
+
+IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "extraction", "limit_overrides", "repeat", "programs")
 
 
 def check_resumable(previous: dict | None, manifest: dict, out: Path) -> None:
     if previous is None:
         return
     def strip(m: dict) -> dict:
-        return {k: ([{"sha256": i["sha256"]} for i in m[k]] if k == "inputs" else m[k]) for k in IDENTITY_FIELDS}
+        return {k: ([{"sha256": i["sha256"]} for i in m[k]] if k == "inputs" else m.get(k)) for k in IDENTITY_FIELDS}
     before, after = strip(previous), strip(manifest)
     changed = [k for k in IDENTITY_FIELDS if before.get(k) != after.get(k)]
     runtime_changed = [
@@ -136,7 +149,7 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
     """Score the dumps into ``options.out``. ``engine_factory(executor)`` picks where candidates
     run (default: a local thread pool of ``options.jobs`` workers)."""
     executor = Executor(sandbox, problems, runtimes, options.mode, options.limit_overrides, repeat=options.repeat,
-                        extract_policy=options.extract)
+                        extract_policy=options.extract, programs=options.programs)
     engine = engine_factory(executor) if engine_factory else LocalEngine(executor, options.jobs)
     cache = VerdictCache(options.cache_dir)
     manifest = build_manifest(options, problems, runtimes, sandbox, executor)
@@ -225,7 +238,7 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
             finally:
                 progress.finish()
 
-            summary = summarize(read_rows(store.executions_path), options.ks)
+            summary = summarize(read_rows(store.executions_path), options.ks, kinds=problems.kinds)
             summary["rejected"] = counts["rejected"]
             summary["retried_infra_errors"] = retried
             summary["executions"] = {"run": counts["executed"], "shared": counts["shared"],

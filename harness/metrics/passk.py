@@ -50,8 +50,9 @@ def parse_ks(text: str) -> list[int]:
     return ks
 
 
-def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
-    """Per (problem, language) counts, then pass@k averaged per language and overall.
+def summarize(rows: Iterable[dict], ks: list[int], kinds: dict[str, str] | None = None) -> dict:
+    """Per (problem, language) counts, then pass@k averaged per language and overall; with
+    ``kinds`` (problem id -> function or program) also per kind of problem, over every language.
 
     Infra errors are not the candidate's doing, so they count neither as samples nor passes.
     A k above any problem's sample count makes that aggregate ``None`` (not available).
@@ -59,9 +60,11 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
     samples: dict[tuple[str, str], list[int]] = defaultdict(lambda: [0, 0])
     outcomes: dict[str, dict[str, int]] = defaultdict(lambda: dict.fromkeys(OUTCOMES, 0))
     flaky: dict[str, int] = defaultdict(int)
+    pair_outcomes: dict[tuple[str, str], dict[str, int]] = defaultdict(lambda: dict.fromkeys(OUTCOMES, 0))
     for row in rows:
         language = row["language"]
         outcomes[language][row["outcome"]] += 1
+        pair_outcomes[(row["problem"], language)][row["outcome"]] += 1
         flaky[language] += bool(row.get("flaky"))
         if row["outcome"] == "infra_error":
             continue
@@ -84,6 +87,8 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
 
     languages = sorted({language for _, language in samples} | set(outcomes))
     by_language = {lang: mean_over([p for p in per_pair if p[1] == lang]) for lang in languages}
+    kind_of = {pair: (kinds or {}).get(pair[0], "function") for pair in per_pair}
+    by_kind = {kind: mean_over([p for p in per_pair if kind_of[p] == kind]) for kind in sorted(set(kind_of.values()))}
     problems_per_language = {lang: sum(1 for p in per_pair if p[1] == lang) for lang in languages}
     min_samples = {
         lang: min((samples[p][0] for p in per_pair if p[1] == lang), default=0) for lang in languages
@@ -93,6 +98,13 @@ def summarize(rows: Iterable[dict], ks: list[int]) -> dict:
         "pass_at_k": {"overall": mean_over(list(per_pair)), "by_language": by_language},
         "outcomes": {lang: outcomes[lang] for lang in languages},
         "problems": problems_per_language,  # problems scored in each language
+        "kinds": {kind: {"pass_at_k": by_kind[kind],
+                         "problems": len({p[0] for p in per_pair if kind_of[p] == kind}),
+                         "pairs": sum(1 for p in per_pair if kind_of[p] == kind),
+                         "samples": sum(samples[p][0] for p in per_pair if kind_of[p] == kind),
+                         "outcomes": {o: sum(counts[o] for pair, counts in pair_outcomes.items()
+                                             if (kinds or {}).get(pair[0], "function") == kind) for o in OUTCOMES}}
+                  for kind in by_kind} if kinds is not None else {},
         "problems_overall": len({problem for problem, _ in per_pair}),  # distinct problems, any language
         "pairs": len(per_pair),  # (problem, language) pairs: what the overall figure averages over
         "min_samples_per_problem": min_samples,

@@ -72,6 +72,7 @@ class ProblemSet:
     problems: dict[str, "Problem | ProgramProblem"]
     digest: str
     calibration: dict = field(default_factory=dict)  # calibrated_limits.yaml's header, if any
+    parts: tuple = ()  # the sets merged into this one (``--set a,b``), else empty
 
     @property
     def kinds(self) -> dict[str, str]:
@@ -94,7 +95,13 @@ def resolve_set_path(name_or_path: str) -> Path:
     raise ProblemError(f"no problem set {name_or_path!r}: not a folder, nor a bundled set ({', '.join(known)})")
 
 
+# Several sets scored as one (``--set core,dockside``): both kinds of problem in one run.
+SET_SEPARATOR = ","
+
+
 def load_problem_set(name_or_path: str) -> ProblemSet:
+    if SET_SEPARATOR in name_or_path and not Path(name_or_path).expanduser().is_dir():
+        return merge_problem_sets([load_problem_set(part) for part in name_or_path.split(SET_SEPARATOR) if part])
     path = resolve_set_path(name_or_path)
     meta = {}
     meta_file = path / "set.yaml"
@@ -147,6 +154,27 @@ def load_problem_set(name_or_path: str) -> ProblemSet:
         digest=hasher.hexdigest(),
         calibration=calibration,
     )
+
+
+def merge_problem_sets(parts: list[ProblemSet]) -> ProblemSet:
+    """Sets loaded one by one, as one set: their problems (ids must not repeat), a digest of
+    their digests, and a path that names every folder (``load_problem_set`` reads it back)."""
+    if len(parts) == 1:
+        return parts[0]
+    problems: dict = {}
+    for part in parts:
+        for pid, problem in part.problems.items():
+            if pid in problems:
+                raise ProblemError(f"{problem.source}: problem id {pid!r} is also {problems[pid].source}; "
+                                   "sets scored together need distinct ids")
+            problems[pid] = problem
+    hasher = hashlib.sha256()
+    for part in parts:
+        hasher.update(part.name.encode() + b"\0" + part.digest.encode() + b"\0")
+    return ProblemSet(name=SET_SEPARATOR.join(p.name for p in parts),
+                      description="; ".join(p.description for p in parts if p.description),
+                      path=Path(SET_SEPARATOR.join(str(p.path) for p in parts)), problems=problems,
+                      digest=hasher.hexdigest(), parts=tuple(parts))
 
 
 def _program_variants(path: Path):

@@ -56,7 +56,7 @@ def render_compare(result: dict, colour: bool = False, gate_result: dict | None 
     main = [r for r in result["groups"] if r["kind"] in ("language", "overall")]
     for k in ks:
         out += ["", paint(f"pass@{k}", "1", colour), _rows_table(main, k, "language", result["greedy"])]
-    for kind in ("difficulty", "tag"):
+    for kind in ("kind", "difficulty", "tag"):
         rows = [r for r in result["groups"] if r["kind"] == kind]
         if rows:
             out += ["", paint(f"pass@{ks[0]} by {kind} (all languages)", "1", colour),

@@ -19,7 +19,7 @@ def render_html(report: dict) -> str:
     env.filters["pct"] = pct
     ks = report["settings"]["ks"]
     groups_by_kind = {kind: [r for r in report["groups"] if r["kind"] == kind]
-                      for kind in ("language", "overall", "difficulty", "tag")}
+                      for kind in ("language", "overall", "kind", "difficulty", "tag")}
     bars = [{"name": name, "total": sum(c.values()),
              "segments": _svg_segments(c)} for name, c in report["outcomes"].items()]
     grid = [{"problem": p["problem"], "difficulty": p["difficulty"], "tags": p["tags"],
@@ -28,7 +28,7 @@ def render_html(report: dict) -> str:
     return env.get_template("report.html.j2").render(
         report=report, ks=ks, describe=describe_settings(report["settings"]),
         main_rows=groups_by_kind["language"] + groups_by_kind["overall"],
-        tag_sections=[(kind, groups_by_kind[kind]) for kind in ("difficulty", "tag") if groups_by_kind[kind]],
+        tag_sections=[(kind, groups_by_kind[kind]) for kind in ("kind", "difficulty", "tag") if groups_by_kind[kind]],
         bars=bars, outcomes=OUTCOMES, colours=OUTCOME_COLOURS, grid=grid, flag_footnote=flag_footnote,
         provenance=provenance_lines(report["provenance"]), notes_cell=notes_cell, trust_flag=trust_flag,
         repeats_text=repeats_text,

@@ -34,7 +34,7 @@ def render_markdown(report: dict) -> str:
 
     out += ["## pass@k", "", f"{describe_settings(report['settings'])}; cells are estimate [low, high] in percent.", ""]
     out += [group_md([r for r in report["groups"] if r["kind"] in ("language", "overall")], "language"), ""]
-    for kind in ("difficulty", "tag"):
+    for kind in ("kind", "difficulty", "tag"):
         rows = [r for r in report["groups"] if r["kind"] == kind]
         if rows:
             out += [f"## By {kind} (all languages)", "", group_md(rows, kind), ""]

@@ -27,6 +27,12 @@ def pass_table(summary: dict, colour: bool = False, title: str | None = None) ->
             + [percent(values[str(k)]) for k in ks]
             + [str(outcomes.get(o, 0)) for o in OUTCOMES]
         )
+    kinds = summary.get("kinds") or {}
+    if len(kinds) > 1:  # both kinds of problem in the run: each kind over every language
+        for kind, figures in kinds.items():
+            rows.append([f"{kind} problems", str(figures["problems"]), str(figures["samples"])]
+                        + [percent(figures["pass_at_k"][str(k)]) for k in ks]
+                        + [str(figures["outcomes"].get(o, 0)) for o in OUTCOMES])
     overall = summary["pass_at_k"]["overall"]
     total_outcomes = {o: sum(summary["outcomes"][lang].get(o, 0) for lang in summary["outcomes"]) for o in OUTCOMES}
     rows.append(

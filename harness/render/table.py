@@ -21,7 +21,7 @@ def render_table(report: dict, colour: bool = False, summary: dict | None = None
         out.append(paint("warning: " + warning, "33", colour))
     out.append(paint("pass@k with intervals", "1", colour) + f" ({describe_settings(report['settings'])})")
     out.append(_group_table([r for r in report["groups"] if r["kind"] in ("language", "overall")], ks, "language"))
-    for kind in ("difficulty", "tag"):
+    for kind in ("kind", "difficulty", "tag"):
         rows = [r for r in report["groups"] if r["kind"] == kind]
         if rows:
             out += ["", paint(f"by {kind} (all languages)", "1", colour), _group_table(rows, ks, kind)]

@@ -11,7 +11,7 @@ from ..console import paint, render as render_columns
 
 def render_trend(trend: dict, colour: bool = False) -> str:
     s = trend["settings"]
-    series = trend["languages"] + ["overall"]
+    series = trend["languages"] + [f"{kind} problems" for kind in trend.get("kinds", [])] + ["overall"]
     out = [f"pass@k by checkpoint; cells: estimate [low, high] in percent, {100 * s['confidence']:g}% "
            f"{s['method']} bootstrap over problems, {s['resamples']} resamples, seed {s['seed']}"]
     out += [paint("warning: " + w, "33", colour) for w in trend["warnings"]]
@@ -21,7 +21,7 @@ def render_trend(trend: dict, colour: bool = False) -> str:
         for point in trend["points"]:
             cells = [str(point["step"]) if point["step"] is not None else "-", point["label"]]
             for name in series:
-                row = point["groups"].get(name)
+                row = point["groups"].get(name.removesuffix(" problems"))
                 if row is None:
                     cells.append("-")
                     continue
@@ -51,7 +51,7 @@ def plot_trend(trend: dict, path: Path):
     figure = Figure(figsize=(5.5 * len(ks), 4.2), layout="constrained")
     axes = figure.subplots(1, len(ks), squeeze=False)[0]
     for ax, k in zip(axes, ks):
-        for name in trend["languages"] + ["overall"]:
+        for name in trend["languages"] + trend.get("kinds", []) + ["overall"]:
             series = [(x, p["groups"][name]) for x, p in zip(xs, points) if name in p["groups"]
                       and p["groups"][name]["pass_at_k"][str(k)] is not None]
             if not series:

@@ -23,7 +23,7 @@ class Run:
     manifest: dict
     summary: dict | None
     rows: list[dict]
-    problems: dict[str, dict]  # id -> {"difficulty", "tags", "title"}; empty when the set is unreadable
+    problems: dict[str, dict]  # id -> {"difficulty", "tags", "title", "kind"}; empty when the set is unreadable
     warnings: list[str] = field(default_factory=list)
     outcomes: dict[tuple[str, str], Counter] = field(default_factory=dict)
 
@@ -109,7 +109,7 @@ def _problem_info(manifest: dict, warnings: list[str]) -> dict[str, dict]:
         if recorded.get("digest") and problem_set.digest != recorded["digest"]:
             warnings.append(f"problem set {where} changed since the run (digest differs): tags read from "
                             "the current files")
-        return {p.id: {"difficulty": p.difficulty, "tags": list(p.tags), "title": p.title}
+        return {p.id: {"difficulty": p.difficulty, "tags": list(p.tags), "title": p.title, "kind": p.kind}
                 for p in problem_set.problems.values()}
     if recorded:
         warnings.append(f"problem set {recorded.get('path') or recorded.get('name')} not found: "
