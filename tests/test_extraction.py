@@ -245,3 +245,21 @@ def test_a_vararg_parameter_takes_any_number_of_arguments():
               "```lua\nfunction f(a, b)\n  return b\nend\n```")
     done = _whole(spec, "f", 1, answer)
     assert "return a" in done.code and done.record["source"] == "block 1 of 2 (lua)"
+
+
+
+def test_wrappers_nest_a_class_inside_a_namespace_is_unwrapped_from_both():
+    # C#: a namespace body holds using directives and type declarations, and a class's body its
+    # methods (ECMA-334, "Namespaces" and "Classes"; from memory). A whole program puts the
+    # method two wrappers deep; the namespace's own using directive is kept as an import.
+    spec = parse_extraction_spec({"grammar": "tree_sitter_c_sharp", "functions": ["method_declaration"],
+                                  "imports": ["using_directive"],
+                                  "wrappers": {"class_declaration": "body", "namespace_declaration": "body"},
+                                  "entry_points": ["Main"]})
+    answer = ("using System;\nnamespace Ferries\n{\n    using System.IO;\n    class Program\n    {\n"
+              "        static int F(int a) { return a + 1; }\n"
+              "        static void Main() { Console.WriteLine(F(1)); }\n    }\n}\n")
+    done = extract(ExtractionRequest("whole", answer, "", "", "F", 1, (), spec))
+    assert done.record["method"] == "parser" and done.record["kept"] == ["function F"]
+    assert done.code == "        static int F(int a) { return a + 1; }\n"
+    assert done.imports == "using System;\n    using System.IO;" and "function Main" in done.record["dropped"]

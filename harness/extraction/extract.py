@@ -144,17 +144,29 @@ def _read(request: ExtractionRequest, text: str, where: str, tagged: bool) -> _R
     target, exact = _target(request, items)
     if target is None:
         # The function may sit inside a class the runtime's template supplies itself.
-        for wrapper in [i for i in items if i.inner.type in spec.wrappers]:
-            body = wrapper.inner.child_by_field_name(spec.wrappers[wrapper.inner.type])
-            members = items_of(spec, source, body, wrapped=True) if body is not None else []
-            found, found_exact = _target(request, members)
-            if found is not None:
-                index = items.index(wrapper)
-                items = items[:index] + [Item("wrapper", wrapper.node, wrapper.inner, "", wrapper.name, source)] \
-                    + members + items[index + 1:]
-                target, exact = found, found_exact
-                break
+        items, target, exact = _unwrap(request, source, items)
     return _Reading(where, source, items, target, exact, tagged)
+
+
+MAX_WRAPPERS = 3
+
+
+def _unwrap(request: ExtractionRequest, source: bytes, items: list[Item],
+            depth: int = 1) -> tuple[list[Item], Item | None, bool]:
+    """Replace the wrapper that holds the target by its members; wrappers nest (a class in a
+    namespace), up to MAX_WRAPPERS deep."""
+    spec = request.spec
+    for wrapper in [i for i in items if i.inner.type in spec.wrappers]:
+        body = wrapper.inner.child_by_field_name(spec.wrappers[wrapper.inner.type])
+        members = items_of(spec, source, body, wrapped=True) if body is not None else []
+        found, found_exact = _target(request, members)
+        if found is None and depth < MAX_WRAPPERS:
+            members, found, found_exact = _unwrap(request, source, members, depth + 1)
+        if found is not None:
+            index = items.index(wrapper)
+            return (items[:index] + [Item("wrapper", wrapper.node, wrapper.inner, "", wrapper.name, source)]
+                    + members + items[index + 1:]), found, found_exact
+    return items, None, False
 
 
 def _target(request: ExtractionRequest, items: list[Item]) -> tuple[Item | None, bool]:
