@@ -247,7 +247,6 @@ def test_a_vararg_parameter_takes_any_number_of_arguments():
     assert "return a" in done.code and done.record["source"] == "block 1 of 2 (lua)"
 
 
-
 def test_wrappers_nest_a_class_inside_a_namespace_is_unwrapped_from_both():
     # C#: a namespace body holds using directives and type declarations, and a class's body its
     # methods (ECMA-334, "Namespaces" and "Classes"; from memory). A whole program puts the
