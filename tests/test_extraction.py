@@ -262,3 +262,14 @@ def test_wrappers_nest_a_class_inside_a_namespace_is_unwrapped_from_both():
     assert done.record["method"] == "parser" and done.record["kept"] == ["function F"]
     assert done.code == "        static int F(int a) { return a + 1; }\n"
     assert done.imports == "using System;\n    using System.IO;" and "function Main" in done.record["dropped"]
+
+
+def test_prose_that_swallows_unfenced_code_is_passed_over_a_paragraph_at_a_time():
+    # Lua 5.4 manual, 3.1 "Lexical Conventions": `function` is a reserved word, so "The function
+    # below" opens a function declaration that runs into the code after it.
+    spec = {"grammar": "tree_sitter_lua", "functions": ["function_declaration"]}
+    answer = "The function below adds one.\n\nlocal function f(a)\n  return a + 1\nend\n\nIt's short.\n"
+    done = _whole(spec, "f", 1, answer)
+    assert done.record["source"] == "the text from line 3"
+    assert done.code == "local function f(a)\n  return a + 1\nend\n"
+    assert _whole(spec, "f", 1, "No code here.\n\nNone here either.\n").record["method"] == "whole_text"

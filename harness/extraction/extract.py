@@ -120,8 +120,7 @@ def _whole(request: ExtractionRequest) -> Extraction:
                 for n, block in enumerate(blocks, start=1)]
     found = [r for r in readings if r.target is not None]
     if not found:
-        whole = _read(request, request.completion, "the whole text", False)
-        found = [whole] if whole.target is not None else []
+        found = _unfenced(request)
     if not found:
         fallback = _textual(request, f"no block defines {request.function}")
         fallback.record["policy"] = policy_label("syntax")
@@ -130,6 +129,27 @@ def _whole(request: ExtractionRequest) -> Extraction:
     # equals the last wins (a model's revised version follows its first attempt).
     best = max(enumerate(found), key=lambda pair: (pair[1].exact, pair[1].tagged, pair[0]))[1]
     return _select(request, best)
+
+
+MAX_PROSE_PARAGRAPHS = 6
+_BLANK_LINES = re.compile(r"\n(?:[ \t]*\n)+")
+
+
+def _unfenced(request: ExtractionRequest) -> list[_Reading]:
+    """No fenced block defines the target: the whole text, else the text after its first few
+    paragraphs (a sentence before the code can swallow it: `function` in "The function below"
+    is a keyword, the apostrophe in "Here's" opens a string)."""
+    text, start = request.completion, 0
+    for _ in range(MAX_PROSE_PARAGRAPHS + 1):
+        where = "the whole text" if start == 0 else f"the text from line {text.count(chr(10), 0, start) + 1}"
+        reading = _read(request, text[start:], where, False)
+        if reading.target is not None:
+            return [reading]
+        gap = _BLANK_LINES.search(text, start)
+        if gap is None:
+            return []
+        start = gap.end()
+    return []
 
 
 def _tag_matches(spec: ExtractionSpec, block: Block) -> bool:
