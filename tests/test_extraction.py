@@ -273,3 +273,29 @@ def test_prose_that_swallows_unfenced_code_is_passed_over_a_paragraph_at_a_time(
     assert done.record["source"] == "the text from line 3"
     assert done.code == "local function f(a)\n  return a + 1\nend\n"
     assert _whole(spec, "f", 1, "No code here.\n\nNone here either.\n").record["method"] == "whole_text"
+
+
+def test_an_inner_only_wrapper_is_looked_through_and_left_out():
+    # ECMA-262 (section 16.2.3, Exports; from memory): `export` declarations belong to module
+    # code; a CommonJS script (Node compiles it as a function body) refuses them. The function
+    # inside is kept, the wrapper's own word is not, and the exported default `main` is dropped.
+    spec = parse_extraction_spec({"grammar": "tree_sitter_javascript", "functions": ["function_declaration"],
+                                  "inner_only": ["export_statement"]})
+    answer = "export function f(a) {\n  return a + 1;\n}\n\nexport default function main() {\n  f(1);\n}\n"
+    done = extract(ExtractionRequest("whole", answer, "", "", "f", 1, (), spec))
+    assert done.code == "function f(a) {\n  return a + 1;\n}\n" and done.record["dropped"] == ["function main"]
+
+
+def test_a_function_beats_a_same_named_definition_that_declares_no_parameters():
+    # A block of tests that binds the name by loading it (Node's require returns the module's
+    # exports; from memory) defines no function: the block that writes the function wins,
+    # though it comes first; a const holding an arrow function declares its parameters.
+    spec = parse_extraction_spec({"grammar": "tree_sitter_javascript", "functions": ["function_declaration"],
+                                  "definitions": ["lexical_declaration"]})
+    answer = ("```js\nfunction f(a) {\n  return a + 1;\n}\n```\n"
+              "```js\nconst f = require(\"./f\");\ntest(\"f\", () => expect(f(1)).toBe(2));\n```\n")
+    done = extract(ExtractionRequest("whole", answer, "", "", "f", 1, (), spec))
+    assert done.record["source"] == "block 1 of 2 (js)" and done.record["kept"] == ["function f"]
+    arrow = answer.replace("function f(a) {\n  return a + 1;\n}", "const f = (a) => a + 1;")
+    done = extract(ExtractionRequest("whole", arrow, "", "", "f", 1, (), spec))
+    assert done.record["source"] == "block 1 of 2 (js)" and done.code == "const f = (a) => a + 1;\n"

@@ -16,7 +16,7 @@ from functools import lru_cache
 
 from .fences import Block, fenced_blocks
 from .spec import ExtractionSpec
-from .syntax import GrammarMissing, Item, functions_named, item_of, items_of, parse
+from .syntax import GrammarMissing, Item, functions_named, item_of, items_of, parameter_range, parse
 
 POLICY_VERSION = 1
 EXTRACTION_POLICIES = ("syntax", "strict")
@@ -125,10 +125,17 @@ def _whole(request: ExtractionRequest) -> Extraction:
         fallback = _textual(request, f"no block defines {request.function}")
         fallback.record["policy"] = policy_label("syntax")
         return fallback
-    # Exact parameter count beats a name match; a tagged block beats an untagged one; among
-    # equals the last wins (a model's revised version follows its first attempt).
-    best = max(enumerate(found), key=lambda pair: (pair[1].exact, pair[1].tagged, pair[0]))[1]
+    # Exact parameter count beats a name match; a function beats a same-named definition that
+    # declares no parameters (`const f = require("./f")` in a block of tests); a tagged block
+    # beats an untagged one; among equals the last wins (a model's revised version follows its
+    # first attempt).
+    best = max(enumerate(found), key=lambda pair: (pair[1].exact, _callable(spec, pair[1].target),
+                                                   pair[1].tagged, pair[0]))[1]
     return _select(request, best)
+
+
+def _callable(spec: ExtractionSpec, target: Item) -> bool:
+    return target.kind == "function" or parameter_range(spec, target.inner) is not None
 
 
 MAX_PROSE_PARAGRAPHS = 6

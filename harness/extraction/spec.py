@@ -29,6 +29,7 @@ class ExtractionSpec:
     definitions: dict[str, str | None] = field(default_factory=dict)
     imports: dict[str, frozenset[str] | None] = field(default_factory=dict)
     transparent: frozenset[str] = frozenset()
+    inner_only: frozenset[str] = frozenset()  # transparent wrappers whose own words are not kept (export)
     wrappers: dict[str, str] = field(default_factory=dict)
     entry_points: frozenset[str] = frozenset({"main"})
     import_naming: str = "text"
@@ -45,7 +46,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
     """Read the mapping under ``extraction:``; errors name the field, the caller adds the file."""
     if not isinstance(raw, dict):
         raise ExtractionSpecError("expected a mapping")
-    known = {"grammar", "tags", "functions", "definitions", "imports", "transparent", "wrappers",
+    known = {"grammar", "tags", "functions", "definitions", "imports", "transparent", "inner_only", "wrappers",
              "entry_points", "import_naming", "unused_imports", "late_imports", "parameters",
              "skip_parameters"}
     unknown = set(raw) - known
@@ -104,7 +105,8 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         functions=frozenset(functions),
         definitions=mapping("definitions", allow_none=True),
         imports={k: (frozenset(v) if v is not None else None) for k, v in word_mapping("imports").items()},
-        transparent=frozenset(names("transparent")),
+        transparent=frozenset(names("transparent")) | frozenset(names("inner_only")),
+        inner_only=frozenset(names("inner_only")),
         wrappers={k: v for k, v in wrappers.items()},
         entry_points=frozenset(names("entry_points", ["main"])),
         import_naming=choice("import_naming", IMPORT_NAMING, "text"),

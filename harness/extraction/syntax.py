@@ -84,7 +84,10 @@ def items_of(spec: ExtractionSpec, source: bytes, container: tree_sitter.Node, w
 
 def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped: bool = False) -> Item:
     inner = _unwrap_transparent(spec, node)
-    text = node_text(source, node) + _trailing_punctuation(source, node)
+    # A wrapper that the runtime cannot take (`export` in a CommonJS script) is looked through
+    # and left out: the declaration inside it is what is kept.
+    shown = inner if node.type in spec.inner_only else node
+    text = node_text(source, shown) + _trailing_punctuation(source, shown)
     if _is_import(spec, source, node) or (inner is not node and _is_import(spec, source, inner)):
         return Item("import", node, inner, text, source=source, wrapped=wrapped,
                     bound=frozenset(import_names(spec, source, inner)))
