@@ -56,8 +56,10 @@ def format_duration(seconds: float) -> str:
 class Progress:
     """Redraws one line on a terminal; elsewhere prints a line every ``every`` seconds."""
 
-    def __init__(self, total: int, label: str = "scoring", stream=None, enabled: bool = True, every: float = 15.0):
+    def __init__(self, total: int, label: str = "scoring", stream=None, enabled: bool = True, every: float = 15.0,
+                 cpu_share=None):
         self.total = max(total, 1)
+        self.cpu_share = cpu_share  # () -> share of the workers' cores in use so far, or None
         self.label = label
         self.stream = stream or sys.stderr
         self.enabled = enabled
@@ -84,12 +86,14 @@ class Progress:
         share = self.done / self.total
         remaining = (self.total - self.done) / (self.done / elapsed) if self.done and elapsed > 0 else 0
         pass_share = f"{100 * self.passed / self.executed:.0f}%" if self.executed else "-"
+        cpu = self.cpu_share() if self.cpu_share is not None else None
         width = 28
         filled = int(width * min(share, 1.0))
         bar = "#" * filled + "." * (width - filled)
         text = (
             f"{self.label} [{bar}] {self.done}/{self.total} {100 * share:5.1f}%  "
             f"{rate:.1f} cand/s  passed {pass_share}  "
+            + (f"CPU {100 * cpu:.0f}%  " if cpu is not None else "")
             + (f"took {format_duration(elapsed)}" if final else f"ETA {format_duration(remaining)}")
         )
         if self.tty:

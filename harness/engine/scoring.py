@@ -27,6 +27,7 @@ from .scheduling import interleave
 from ..sandbox import Sandbox
 from ..store import MANIFEST, SUMMARY, ResultStore, StoreMismatch, read_rows
 from .cache import VerdictCache
+from .utilisation import CpuMeter
 from ..extraction import policy_label
 
 
@@ -169,7 +170,10 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
             manifest["finished_at"] = None
             store.write_json(MANIFEST, manifest)
             store.start_writing()
-            progress = Progress(total, label=options.label or "scoring", enabled=options.progress)
+            # CPU utilisation of the local workers (engine/utilisation.py); a cluster's is its own.
+            meter = CpuMeter(options.jobs) if manifest["engine"].get("engine") == "local" else None
+            progress = Progress(total, label=options.label or "scoring", enabled=options.progress,
+                                cpu_share=meter.share if meter else None)
             waiting: dict[str, list] = {}  # program key -> samples sharing the execution in flight
 
             def record(sample_key: tuple, verdict: Verdict, shared: bool, extraction: dict) -> None:
@@ -241,6 +245,8 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
             summary = summarize(read_rows(store.executions_path), options.ks, kinds=problems.kinds)
             summary["rejected"] = counts["rejected"]
             summary["retried_infra_errors"] = retried
+            if meter is not None and (share := meter.share()) is not None:
+                summary["cpu_utilisation"] = {"share": round(share, 3), "cores": meter.cores}
             summary["executions"] = {"run": counts["executed"], "shared": counts["shared"],
                                      "saved_share": counts["shared"] / max(1, counts["executed"] + counts["shared"])}
             store.write_json(SUMMARY, summary)

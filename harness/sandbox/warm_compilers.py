@@ -406,6 +406,18 @@ class ServerCompiler:
         if answer != b"ready":
             raise ServerTrouble(f"the server said {answer[:80]!r}, not 'ready'")
 
+    def start_now(self, limits: Limits, count: int) -> int:
+        """Start up to ``count`` servers and wait for them (a run's or a benchmark's warm-up);
+        how many are idle now."""
+        with self.lock:
+            self.limits = self.limits or limits
+            wanted = max(0, count - len(self.idle) - self.starting)
+            self.starting += wanted
+        with futures.ThreadPoolExecutor(max_workers=max(1, wanted)) as starting:
+            list(starting.map(lambda _: self._start(limits), range(wanted)))
+        with self.lock:
+            return len(self.idle)
+
     def _give_back(self, server: Server) -> None:
         server.uses += 1
         server.last_used = time.monotonic()
@@ -664,11 +676,14 @@ class WarmCompilers:
                                 f"cold (no precompiled headers for the {backend} backend)")
         return HeaderCompiler(self, runtime, spec)
 
-    def prepare(self, runtime, limits: Limits) -> Compiler:
-        """The runtime's compiler, ready for a candidate (a precompiled header built first)."""
+    def prepare(self, runtime, limits: Limits, servers: int = 0) -> Compiler:
+        """The runtime's compiler, ready for a candidate (a precompiled header built first;
+        ``servers`` compile servers started and waited for)."""
         found = self.compiler(runtime)
         if isinstance(found, HeaderCompiler):
             found.prepare(limits)
+        elif isinstance(found, ServerCompiler) and servers:
+            found.start_now(limits, servers)
         return found
 
     def describe(self) -> dict[str, str]:
