@@ -299,3 +299,18 @@ def test_a_function_beats_a_same_named_definition_that_declares_no_parameters():
     arrow = answer.replace("function f(a) {\n  return a + 1;\n}", "const f = (a) => a + 1;")
     done = extract(ExtractionRequest("whole", arrow, "", "", "f", 1, (), spec))
     assert done.record["source"] == "block 1 of 2 (js)" and done.code == "const f = (a) => a + 1;\n"
+
+
+def test_a_lexical_definition_after_the_code_that_names_it_is_not_kept():
+    # perlsub, "Private Variables via my()": a my variable is visible from its declaration to the
+    # end of the enclosing block or file (from memory). So the sub's $memo is the one before it,
+    # and the script's `my $start = <STDIN>` after it is another variable, not kept.
+    spec = {"grammar": "tree_sitter_perl", "functions": ["subroutine_declaration_statement"],
+            "definitions": {"expression_statement": "variable_declaration | assignment_expression/left"},
+            "lexical": ["expression_statement"]}
+    answer = ("my %memo;\nsub f {\n    my ($start) = @_;\n    return $memo{$start} //= length $start;\n}\n"
+              "my $start = <STDIN>;\nprint f($start);\n")
+    done = _whole(spec, "f", 1, answer)
+    assert done.record["kept"] == ["definition memo", "function f"] and "definition start" in done.record["dropped"]
+    plain = _whole({k: v for k, v in spec.items() if k != "lexical"}, "f", 1, answer)
+    assert "definition start" in plain.record["kept"]  # without the declaration, the name alone decides

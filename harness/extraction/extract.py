@@ -258,14 +258,16 @@ def _closure(request: ExtractionRequest, items: list[Item], target: Item) -> lis
                 continue
             by_name.setdefault(item.name, []).append(item)
     chosen = {id(target)}
-    pending = list(target.refs)
+    pending = [(name, target) for name in target.refs]
     while pending:
-        name = pending.pop()
+        name, user = pending.pop()
         for item in by_name.get(name, []):
+            if item.inner.type in spec.lexical and item.node.start_byte > user.node.start_byte:
+                continue  # out of the user's scope: a script's `my $start = <STDIN>` after the sub
             if id(item) not in chosen and (item.kind != "function" or item.name != request.function
                                            or item.accepts(request.param_count)):
                 chosen.add(id(item))
-                pending.extend(item.refs)
+                pending.extend((n, item) for n in item.refs)
     return [i for i in items if id(i) in chosen]
 
 

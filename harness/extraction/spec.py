@@ -37,6 +37,9 @@ class ExtractionSpec:
     late_imports: str = "drop"
     parameters: tuple[str, ...] = ("parameters",)
     skip_parameters: frozenset[str] = frozenset()
+    # Definitions seen only by code after them (a `local` in Lua, a `my` in Perl): one written
+    # after the code that names it is not what that code means.
+    lexical: frozenset[str] = frozenset()
 
     def defines(self, node_type: str) -> bool:
         return node_type in self.functions or node_type in self.definitions
@@ -48,7 +51,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         raise ExtractionSpecError("expected a mapping")
     known = {"grammar", "tags", "functions", "definitions", "imports", "transparent", "inner_only", "wrappers",
              "entry_points", "import_naming", "unused_imports", "late_imports", "parameters",
-             "skip_parameters"}
+             "skip_parameters", "lexical"}
     unknown = set(raw) - known
     if unknown:
         raise ExtractionSpecError(f"unknown field(s) {', '.join(sorted(unknown))}; known: {', '.join(sorted(known))}")
@@ -114,4 +117,5 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         late_imports=choice("late_imports", ("keep", "drop"), "drop"),
         parameters=names("parameters", ["parameters"]),
         skip_parameters=frozenset(names("skip_parameters")),
+        lexical=frozenset(names("lexical")),
     )
