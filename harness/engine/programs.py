@@ -174,7 +174,7 @@ def run_program(sandbox: Sandbox, runtime: Runtime, problem: ProgramProblem, sou
 def step_outcome(runtime: Runtime, ran: StepResult, limits: Limits, limit_note: str) -> tuple[str, str]:
     """The outcome of one case's run before its output is checked: ``passed`` means it ended
     normally and its output is to be judged."""
-    from .execution import _error_outcome, _signal_name, _tail
+    from .execution import _error_outcome, _signal_name
 
     if ran.infra_error:
         return "infra_error", ran.infra_error
@@ -188,16 +188,20 @@ def step_outcome(runtime: Runtime, ran: StepResult, limits: Limits, limit_note: 
     if ran.file_size_exceeded:
         return "output_limit", f"wrote a file larger than {limits.max_file_mb} MB"
     if ran.signal or ran.exit_code != 0:
-        if ran.signal:
-            how = f"killed by signal {_signal_name(ran.signal)}"
-        elif ran.exit_code is not None and ran.exit_code > 128:
-            how = f"killed by signal {_signal_name(ran.exit_code - 128)}"
-        else:
-            how = f"exited with status {ran.exit_code}"
-        stderr = _tail(ran.stderr)
+        # The program is exec'd, never run by a shell: a status over 128 is its own (Perl's die
+        # exits 255), not a shell's report of a signal.
+        how = f"killed by signal {_signal_name(ran.signal)}" if ran.signal else f"exited with status {ran.exit_code}"
+        stderr = head_and_tail(ran.stderr)
         outcome, marked = _error_outcome(runtime, stderr, ran, limits) if stderr else ("runtime_error", "")
         return outcome, how + (f": {stderr}" if stderr else "") + marked
     return "passed", ""
+
+
+def head_and_tail(text: str, head: int = 200, tail: int = 250) -> str:
+    """An error output for a detail: its start and its end. Where the message stands differs by
+    language (Python's at the end of a traceback, Java's and Node's at the top)."""
+    text = text.strip()
+    return text if len(text) <= head + tail + 5 else f"{text[:head]} ... {text[-tail:]}"
 
 
 def program_verdict(run: ProgramRun, total: int) -> Verdict:

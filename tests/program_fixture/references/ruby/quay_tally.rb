@@ -1,0 +1,3 @@
+numbers = $stdin.read.split.map(&:to_i)
+weights = numbers[1, numbers[0]]
+puts "#{weights.sum} #{weights.max}"
