@@ -128,17 +128,17 @@ def problems_list(
     runtimes_dir: Optional[List[Path]] = RuntimesDir,
     as_json: bool = typer.Option(False, "--json"),
 ) -> None:
-    """List a set's problems with difficulty, tags, case counts and the languages with references."""
+    """List a set's problems with kind, difficulty, tags, case counts and the languages with references."""
     problem_set = load_set(set_name)
     runtimes = load_runtimes(available_runtimes(runtimes_dir), runtimes_dir)
-    rows = [{"id": p.id, "difficulty": p.difficulty, "tags": list(p.tags), "cases": len(p.cases),
+    rows = [{"id": p.id, "kind": p.kind, "difficulty": p.difficulty, "tags": list(p.tags), "cases": len(p.cases),
              "languages": sorted(name for name, r in runtimes.items() if r.reference(p) is not None)}
             for p in problem_set.problems.values()]
     if as_json:
         typer.echo(json.dumps(rows, indent=2))
         return
-    typer.echo(render(["problem", "difficulty", "cases", "tags", "references"],
-                      [[r["id"], r["difficulty"], str(r["cases"]), ",".join(r["tags"]), ",".join(r["languages"])]
-                       for r in rows], align="llrll"))
+    typer.echo(render(["problem", "kind", "difficulty", "cases", "tags", "references"],
+                      [[r["id"], r["kind"], r["difficulty"], str(r["cases"]), ",".join(r["tags"]),
+                        ",".join(r["languages"])] for r in rows], align="lllrll"))
 
 
