@@ -314,3 +314,49 @@ def test_a_lexical_definition_after_the_code_that_names_it_is_not_kept():
     assert done.record["kept"] == ["definition memo", "function f"] and "definition start" in done.record["dropped"]
     plain = _whole({k: v for k, v in spec.items() if k != "lexical"}, "f", 1, answer)
     assert "definition start" in plain.record["kept"]  # without the declaration, the name alone decides
+
+
+def test_an_attribute_beside_an_item_goes_with_it():
+    # The Rust Reference, "Attributes": an outer attribute `#[...]` applies to the item after it
+    # (from memory); tree-sitter-rust makes it that item's sibling. #[derive(Default)] stays on
+    # the struct the function names, in whole and in continue mode; a test module's goes with it.
+    spec = {"grammar": "tree_sitter_rust", "functions": ["function_item"],
+            "definitions": ["struct_item", "mod_item"], "attributes": ["attribute_item"]}
+    struct = "#[derive(Default)]\n// running total\nstruct T {\n    n: u32,\n}\n"
+    function = "fn f(x: u32) -> u32 {\n    T::default().n + x\n}\n"
+    done = _whole(spec, "f", 1, struct + "\n" + function + "\n#[cfg(test)]\nmod tests {}\n")
+    assert done.code == struct + "\n" + function and done.record["dropped"] == ["definition tests"]
+    prompt, completion = function.split("\n", 1)[0] + "\n", function.split("\n", 1)[1] + "\n" + struct
+    later = extract(ExtractionRequest("continue", completion, prompt, "", "f", 1, (),
+                                      parse_extraction_spec(spec)))
+    assert later.code == function + "\n" + struct and later.record["kept"] == ["definition T"]
+
+
+def test_a_grouped_import_loses_only_the_lines_that_would_not_compile():
+    # The Go Programming Language Specification, "Import declarations" and "Declarations and
+    # scope" (from memory): an import the file never refers to is illegal, and so is declaring
+    # a package name twice in the file block. From one `import (...)` group "fmt" (the
+    # preamble's) and "os" (used by main only) go, each with its own line.
+    spec = {"grammar": "tree_sitter_go", "functions": ["function_declaration"],
+            "imports": ["import_declaration"], "import_naming": "go_import", "unused_imports": "drop"}
+    preamble = 'package main\n\nimport (\n\t"fmt"\n)\n'
+    answer = ('package main\n\nimport (\n\t"container/heap"\n\t"fmt"\n\t"os"\n)\n\n'
+              'func f(h *H) int {\n\theap.Init(h)\n\treturn 1\n}\n\nfunc main() {\n\tfmt.Println(os.Args)\n}\n')
+    done = _whole(spec, "f", 1, answer, preamble)
+    assert done.imports == 'import (\n\t"container/heap"\n)'
+    assert {'"fmt" (already in the preamble)', '"os" (not used by the kept code)'} <= set(done.record["dropped"])
+    # When every line of the group goes, so does the declaration.
+    none_left = answer.replace('\t"container/heap"\n', "").replace("heap.Init(h)", "_ = fmt.Sprint(h)")
+    assert _whole(spec, "f", 1, none_left, preamble).imports == ""
+
+
+def test_a_type_repeated_from_the_preamble_is_not_declared_twice():
+    # The Go Programming Language Specification, "Declarations and scope": no identifier may be
+    # declared twice in the same block (from memory). An answer that copies the prompt's Pair
+    # type uses the preamble's; its own other types stay.
+    spec = {"grammar": "tree_sitter_go", "functions": ["function_declaration"], "definitions": ["type_declaration"]}
+    pair = "type Pair[A, B any] struct {\n\tFirst  A\n\tSecond B\n}\n"
+    answer = pair + "\ntype acc int\n\nfunc f(p Pair[int, int]) acc {\n\treturn acc(p.First)\n}\n"
+    done = _whole(spec, "f", 1, answer, "package main\n\n" + pair)
+    assert done.record["kept"] == ["definition acc", "function f"]
+    assert "definition Pair (already in the preamble)" in done.record["dropped"]

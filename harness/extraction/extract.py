@@ -212,17 +212,21 @@ def _select(request: ExtractionRequest, reading: _Reading) -> Extraction:
     target = reading.target
     kept = _closure(request, reading.items, target)
     preamble = _preamble_imports(spec, request.preamble)
+    kept, again = _not_redefined(kept, target, preamble)
     used = set().union(*(i.refs for i in kept)) if kept else set()
     imports, dropped = [], []
     for item in reading.items:
         if item.kind == "import":
             reason = _import_drop_reason(spec, item, preamble, used)
+            text, parts_dropped = (None, []) if reason else _import_text(spec, item, preamble, used)
+            dropped.extend(parts_dropped)
             if reason:
                 dropped.append(f"{_short(item.text)} ({reason})")
-            else:
-                imports.append(item)
+            elif text is not None:
+                imports.append(Item("import", item.node, item.inner, text, source=item.source, bound=item.bound))
         elif item.kind in ("function", "definition", "other") and item not in kept:
-            dropped.append(_short(item.text) if item.kind == "other" else item.label)
+            dropped.append(_short(item.text) if item.kind == "other" else
+                           item.label + (" (already in the preamble)" if item in again else ""))
     wrapped = any(i.kind == "wrapper" for i in reading.items)
     outside = [i for i in kept if wrapped and not i.wrapped and i is not target]
     inside = [i for i in kept if i not in outside]
@@ -275,15 +279,18 @@ def _closure(request: ExtractionRequest, items: list[Item], target: Item) -> lis
 class _PreambleImports:
     texts: frozenset[str]
     names: frozenset[str]
+    defined: frozenset[str] = frozenset()  # functions and types the preamble itself declares
 
 
 @lru_cache(maxsize=512)
 def _preamble_imports_cached(spec: ExtractionSpec, preamble: str) -> _PreambleImports:
     source = preamble.encode("utf-8", "surrogatepass")
     root = parse(spec, source).root_node
-    found = [i for i in _all_items(spec, source, root) if i.kind == "import"]
+    items = _all_items(spec, source, root)
+    found = [i for i in items if i.kind == "import"]
     return _PreambleImports(frozenset(_normal(i.text) for i in found),
-                            frozenset().union(*(i.bound for i in found)) if found else frozenset())
+                            frozenset().union(*(i.bound for i in found)) if found else frozenset(),
+                            frozenset(i.name for i in items if i.kind in ("function", "definition") and i.name))
 
 
 def _preamble_imports(spec: ExtractionSpec, preamble: str) -> _PreambleImports:
@@ -305,11 +312,40 @@ def _all_items(spec: ExtractionSpec, source: bytes, root) -> list[Item]:
 def _import_drop_reason(spec: ExtractionSpec, item: Item, preamble: _PreambleImports, used: set[str]) -> str | None:
     if _normal(item.text) in preamble.texts:
         return "already in the preamble"
-    if item.bound and item.bound <= preamble.names:
+    return _names_drop_reason(spec, item.bound, preamble, used)
+
+
+def _names_drop_reason(spec: ExtractionSpec, bound: frozenset[str], preamble: _PreambleImports,
+                       used: set[str]) -> str | None:
+    if bound and bound <= preamble.names:
         return "already in the preamble"
-    if spec.unused_imports == "drop" and item.bound and not (item.bound & used):
+    if spec.unused_imports == "drop" and bound and not (bound & used):
         return "not used by the kept code"
     return None
+
+
+def _import_text(spec: ExtractionSpec, item: Item, preamble: _PreambleImports,
+                 used: set[str]) -> tuple[str | None, list[str]]:
+    """An import's text less the parts of a group (``import (...)``) that the preamble already
+    binds or that go unused where that is an error, each dropped with the line it stands on
+    alone (a part sharing its line stays: nothing is rewritten); None when no part is left."""
+    lines, dropped = item.text.split("\n"), []
+    for names, part in item.parts:
+        reason = _names_drop_reason(spec, names, preamble, used)
+        alone = [n for n, line in enumerate(lines) if line.strip() == part]
+        if reason and alone:
+            del lines[alone[0]]
+            dropped.append(f"{part} ({reason})")
+    if item.parts and len(dropped) == len(item.parts):
+        return None, dropped
+    return "\n".join(lines), dropped
+
+
+def _not_redefined(kept: list[Item], target: Item, preamble: _PreambleImports) -> tuple[list[Item], list[Item]]:
+    """Drop a helper that declares a name the preamble declares (a type copied from the
+    prompt): compiled languages reject the second declaration."""
+    again = [i for i in kept if i is not target and i.kind in ("function", "definition") and i.name in preamble.defined]
+    return [i for i in kept if i not in again], again
 
 
 def _normal(text: str) -> str:
@@ -337,9 +373,9 @@ def _continue(request: ExtractionRequest) -> Extraction:
     target_node = targets[-1]
     target = item_of(spec, source, target_node)
     container = target_node.parent
-    later = [item_of(spec, source, c) for c in container.named_children
-             if c.start_byte >= target_node.end_byte and "comment" not in c.type]
+    later = [i for i in items_of(spec, source, container) if i.node.start_byte >= target_node.end_byte]
     kept = [i for i in _closure(request, [target] + later, target) if i is not target]
+    kept = _not_redefined(kept, target, _preamble_imports(spec, request.preamble))[0]
     imports = []
     if spec.late_imports == "keep":
         imports = [i for i in later if i.kind == "import"]

@@ -30,6 +30,7 @@ class ExtractionSpec:
     imports: dict[str, frozenset[str] | None] = field(default_factory=dict)
     transparent: frozenset[str] = frozenset()
     inner_only: frozenset[str] = frozenset()  # transparent wrappers whose own words are not kept (export)
+    attributes: frozenset[str] = frozenset()  # siblings that belong to the item after them (#[derive])
     wrappers: dict[str, str] = field(default_factory=dict)
     entry_points: frozenset[str] = frozenset({"main"})
     import_naming: str = "text"
@@ -51,7 +52,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         raise ExtractionSpecError("expected a mapping")
     known = {"grammar", "tags", "functions", "definitions", "imports", "transparent", "inner_only", "wrappers",
              "entry_points", "import_naming", "unused_imports", "late_imports", "parameters",
-             "skip_parameters", "lexical"}
+             "skip_parameters", "attributes", "lexical"}
     unknown = set(raw) - known
     if unknown:
         raise ExtractionSpecError(f"unknown field(s) {', '.join(sorted(unknown))}; known: {', '.join(sorted(known))}")
@@ -110,6 +111,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         imports={k: (frozenset(v) if v is not None else None) for k, v in word_mapping("imports").items()},
         transparent=frozenset(names("transparent")) | frozenset(names("inner_only")),
         inner_only=frozenset(names("inner_only")),
+        attributes=frozenset(names("attributes")),
         wrappers={k: v for k, v in wrappers.items()},
         entry_points=frozenset(names("entry_points", ["main"])),
         import_naming=choice("import_naming", IMPORT_NAMING, "text"),

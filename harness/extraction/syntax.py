@@ -64,6 +64,7 @@ class Item:
     params: tuple[int, float] | None = None  # (required, most); None: not declared
     wrapped: bool = False
     bound: frozenset[str] = field(default_factory=frozenset)
+    parts: tuple[tuple[frozenset[str], str], ...] = ()  # an import group's pieces: (names, text)
 
     @cached_property
     def refs(self) -> frozenset[str]:
@@ -78,8 +79,21 @@ class Item:
 
 
 def items_of(spec: ExtractionSpec, source: bytes, container: tree_sitter.Node, wrapped: bool = False) -> list[Item]:
-    return [item_of(spec, source, child, wrapped) for child in container.named_children
-            if "comment" not in child.type]
+    items, attached = [], []
+    for child in container.named_children:
+        if "comment" in child.type:
+            continue
+        if child.type in spec.attributes:
+            attached.append(child)
+            continue
+        item = item_of(spec, source, child, wrapped)
+        if attached:
+            # `#[derive(Default)]` is the struct's sibling in the tree but part of it in the language.
+            item.text = source[_text_start(source, attached[0]):_text_start(source, child)].decode(
+                "utf-8", "replace") + item.text
+            attached = []
+        items.append(item)
+    return items + [item_of(spec, source, node, wrapped) for node in attached]
 
 
 def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped: bool = False) -> Item:
@@ -90,7 +104,7 @@ def item_of(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node, wrapped
     text = node_text(source, shown) + _trailing_punctuation(source, shown)
     if _is_import(spec, source, node) or (inner is not node and _is_import(spec, source, inner)):
         return Item("import", node, inner, text, source=source, wrapped=wrapped,
-                    bound=frozenset(import_names(spec, source, inner)))
+                    bound=frozenset(import_names(spec, source, inner)), parts=import_parts(spec, source, inner))
     if inner.type in spec.functions or inner.type in spec.definitions:
         kind = "function" if inner.type in spec.functions else "definition"
         name = definition_name(source, inner, spec.definitions.get(inner.type))
@@ -139,11 +153,13 @@ def _unwrap_transparent(spec: ExtractionSpec, node: tree_sitter.Node) -> tree_si
 def node_text(source: bytes, node: tree_sitter.Node) -> str:
     """The node's text, from the start of its line when only blanks precede it there, so that
     relative indentation survives."""
+    return source[_text_start(source, node):node.end_byte].decode("utf-8", "replace")
+
+
+def _text_start(source: bytes, node: tree_sitter.Node) -> int:
     start = node.start_byte
     line_start = source.rfind(b"\n", 0, start) + 1
-    if not source[line_start:start].strip():
-        start = line_start
-    return source[start:node.end_byte].decode("utf-8", "replace")
+    return line_start if not source[line_start:start].strip() else start
 
 
 def words(source: bytes, node: tree_sitter.Node) -> frozenset[str]:
@@ -249,15 +265,7 @@ def import_names(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node) ->
         return source[n.start_byte:n.end_byte].decode("utf-8", "replace")
 
     if spec.import_naming == "go_import":
-        names = set()
-        for spec_node in _descendants(node, "import_spec"):
-            alias = spec_node.child_by_field_name("name")
-            path = spec_node.child_by_field_name("path")
-            if alias is not None:
-                names.add(text(alias))
-            elif path is not None:
-                names.add(text(path).strip('"`').rsplit("/", 1)[-1])
-        return names
+        return set().union(*(_go_spec_names(source, n) for n in _descendants(node, "import_spec")))
     if spec.import_naming == "rust_use":
         return _rust_use_names(node, text)
     if spec.import_naming == "es_import":
@@ -273,6 +281,28 @@ def import_names(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node) ->
         for child in _descendants(node, "namespace_import"):
             names |= {text(c) for c in child.named_children if c.type == "identifier"}
         return names
+    return set()
+
+
+def import_parts(spec: ExtractionSpec, source: bytes, node: tree_sitter.Node) -> tuple[tuple[frozenset[str], str], ...]:
+    """The pieces of a grouped import that each bind names of their own (Go's specs inside
+    ``import (...)``), with their text, so that one can be dropped without the others."""
+    if spec.import_naming != "go_import":
+        return ()
+    pieces = list(_descendants(node, "import_spec"))
+    if len(pieces) < 2:
+        return ()
+    return tuple((frozenset(_go_spec_names(source, piece)),
+                  source[piece.start_byte:piece.end_byte].decode("utf-8", "replace").strip()) for piece in pieces)
+
+
+def _go_spec_names(source: bytes, spec_node: tree_sitter.Node) -> set[str]:
+    alias = spec_node.child_by_field_name("name")
+    path = spec_node.child_by_field_name("path")
+    if alias is not None:
+        return {source[alias.start_byte:alias.end_byte].decode("utf-8", "replace")}
+    if path is not None:
+        return {source[path.start_byte:path.end_byte].decode("utf-8", "replace").strip('"`').rsplit("/", 1)[-1]}
     return set()
 
 
