@@ -9,6 +9,7 @@ from __future__ import annotations
 import importlib
 import re
 import threading
+import warnings
 from dataclasses import dataclass, field
 from functools import cached_property, lru_cache
 
@@ -37,7 +38,11 @@ def language(module: str, function: str) -> tree_sitter.Language:
     entry = getattr(loaded, function, None)
     if entry is None:
         raise GrammarMissing(f"grammar module {module!r} has no function {function!r}")
-    return tree_sitter.Language(entry())
+    with warnings.catch_warnings():
+        # Some grammar wheels still hand over a pointer as an int, which tree-sitter accepts
+        # with a DeprecationWarning; the language works the same.
+        warnings.simplefilter("ignore", DeprecationWarning)
+        return tree_sitter.Language(entry())
 
 
 def parse(spec: ExtractionSpec, source: bytes) -> tree_sitter.Tree:
