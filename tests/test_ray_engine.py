@@ -325,3 +325,16 @@ def test_an_unknown_engine_or_an_address_without_ray_is_refused(tmp_path, tiny_s
                           (["--address", "10.0.0.1:6379"], "--address is for --engine ray")]:
         done = assay("score", dump, "--set", tiny_set, "--out", tmp_path / "o", *args, check=False)
         assert done.returncode == 2 and message in done.stderr and "Traceback" not in done.stderr
+
+
+def test_the_recipe_carries_the_extraction_policy_to_the_workers(tiny_set, sandbox):
+    """A worker reading text by other rules than the driver would run other programs."""
+    executor = executor_for(tiny_set, sandbox)
+    executor.extract_policy = "strict"
+    spec = spec_for(executor)
+    assert spec.extract_policy == "strict"
+    rebuilt, box = spec.build()
+    try:
+        assert rebuilt.extract_policy == "strict"
+    finally:
+        box.close()

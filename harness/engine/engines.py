@@ -31,6 +31,7 @@ class ExecutorSpec:
     limit_overrides: LimitOverrides = field(default_factory=LimitOverrides)
     repeat: int = 1
     programs: ProgramOptions = field(default_factory=ProgramOptions)
+    extract_policy: str = "syntax"
 
     def build(self):
         """(executor, sandbox); the caller closes the sandbox when done."""
@@ -44,7 +45,7 @@ class ExecutorSpec:
         sandbox = make_sandbox(self.sandbox)
         sandbox.check()
         executor = Executor(sandbox, problems, runtimes, self.mode, self.limit_overrides, repeat=self.repeat,
-                            programs=self.programs)
+                            programs=self.programs, extract_policy=self.extract_policy)
         return executor, sandbox
 
 

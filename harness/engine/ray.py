@@ -79,7 +79,7 @@ def spec_for(executor: Executor) -> ExecutorSpec:
     return ExecutorSpec(problem_set=problem_set, runtimes=tuple(sorted(executor.runtimes)),
                         runtime_dirs=tuple(runtime_dirs), sandbox=executor.sandbox.name, mode=executor.mode,
                         limit_overrides=executor.limit_overrides, repeat=executor.repeat,
-                        programs=executor.programs)
+                        programs=executor.programs, extract_policy=executor.extract_policy)
 
 
 def identity_of(executor: Executor) -> Identity:
