@@ -360,3 +360,31 @@ def test_a_type_repeated_from_the_preamble_is_not_declared_twice():
     done = _whole(spec, "f", 1, answer, "package main\n\n" + pair)
     assert done.record["kept"] == ["definition acc", "function f"]
     assert "definition Pair (already in the preamble)" in done.record["dropped"]
+
+
+# --- whole programs ------------------------------------------------------------------------------
+
+def _program(language, text, mode="whole", policy="syntax"):
+    runtime = load_runtime(language)
+    request = ExtractionRequest(mode, text, "", "", "", 0, runtime.program.stop_sequences, runtime.extraction,
+                                policy, keep_entry_points=True, kind="program")
+    return extract(request)
+
+
+def test_a_whole_program_is_chosen_by_language_and_entry_point_and_kept_whole():
+    answer = ("Compile and run:\n```bash\ng++ -O2 main.cpp && ./a.out < in.txt\n```\n"
+              "A helper first:\n```cpp\nint twice(int x) { return 2 * x; }\n```\n"
+              "The program:\n```cpp\n#include <iostream>\nint twice(int x) { return 2 * x; }\n"
+              "int main() { int n; std::cin >> n; std::cout << twice(n) << \"\\n\"; }\n```\n")
+    done = _program("cpp", answer)
+    assert done.code.startswith("#include <iostream>") and "int main()" in done.code
+    assert done.record["source"] == "block 3 of 3 (cpp)" and done.record["method"] == "parser"
+    strict = _program("cpp", answer, policy="strict")
+    assert strict.code.startswith("g++")  # the textual rules take the first block
+
+
+def test_a_python_program_block_beats_a_shell_block_and_keeps_its_main_guard():
+    answer = ("```sh\npython3 solve.py < input.txt\n```\n```python\nimport sys\n\ndef main():\n"
+              "    print(sum(map(int, sys.stdin.read().split())))\n\nif __name__ == '__main__':\n    main()\n```")
+    done = _program("python", answer)
+    assert "if __name__ == '__main__':" in done.code and done.record["source"] == "block 2 of 2 (python)"

@@ -40,12 +40,12 @@ class ProgramOptions:
 
 def program_extraction(mode: str, runtime: Runtime, prompt: str, completion: str, policy: str) -> Extraction:
     """What of the model's text is the program: the single place where extraction treats the
-    program kind its own way. A whole program keeps everything, ``main`` included; so the
-    textual rules apply (whole: the first fenced block, else the text; continue: the prompt plus
-    the text up to the runtime's program stop sequences), whatever the policy."""
+    program kind its own way. A whole program keeps everything, ``main`` included: the syntax
+    policy only chooses the block (this language's, with an entry point, parsing cleanly), and a
+    continuation keeps the prompt plus the text up to the runtime's program stop sequences."""
     request = ExtractionRequest(mode=mode, completion=completion, prompt=prompt, preamble="", function="",
-                                param_count=0, stops=runtime.program.stop_sequences, spec=None,
-                                policy=policy, keep_entry_points=True)
+                                param_count=0, stops=runtime.program.stop_sequences, spec=runtime.extraction,
+                                policy=policy, keep_entry_points=True, kind="program")
     return extract(request)
 
 

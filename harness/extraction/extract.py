@@ -42,6 +42,7 @@ class ExtractionRequest:
     spec: ExtractionSpec | None
     policy: str = "syntax"
     keep_entry_points: bool = False
+    kind: str = "function"  # function | program (a whole program: kept whole, main included)
 
 
 @dataclass
@@ -64,6 +65,8 @@ def extract(request: ExtractionRequest) -> Extraction:
         why = "strict policy" if request.policy == "strict" else "the runtime declares no grammar"
         return _textual(request, why)
     try:
+        if request.kind == "program":
+            return _program(request)
         if request.mode == "continue":
             return _continue(request)
         return _whole(request)
@@ -355,6 +358,37 @@ def _normal(text: str) -> str:
 def _short(text: str, width: int = 60) -> str:
     line = " ".join(text.split())
     return line if len(line) <= width else line[: width - 1] + "…"
+
+
+# --- whole programs -------------------------------------------------------------------------
+
+def _program(request: ExtractionRequest) -> Extraction:
+    """A program is kept whole, ``main`` and all: only the block is chosen. A continuation of a
+    program's prompt has no function to end at, so it keeps the stop sequences."""
+    if request.mode == "continue":
+        done = _textual(request, "a program's continuation ends at its stop sequences")
+        done.record["policy"] = policy_label("syntax")
+        return done
+    spec = request.spec
+    blocks = fenced_blocks(request.completion)
+    if not blocks:
+        return Extraction(request.completion, record={"policy": policy_label("syntax"), "method": "parser",
+                                                      "source": "the whole text"})
+    ranked = []
+    for number, block in enumerate(blocks, start=1):
+        source = block.text.encode("utf-8", "surrogatepass")
+        root = parse(spec, source).root_node
+        other_language = bool(block.tag) and block.tag not in spec.tags
+        entry = any(functions_named(spec, source, root, name) for name in spec.entry_points)
+        # This language's blocks first, a tagged one before an untagged one, then one with an
+        # entry point (main), then one that parses cleanly; a usage line is shorter than a program.
+        rank = (not other_language, bool(block.tag) and not other_language, entry, not root.has_error,
+                len(block.text.strip()))
+        ranked.append((rank, number, block))
+    _, number, block = max(ranked, key=lambda entry: (entry[0], entry[1]))
+    where = f"block {number} of {len(blocks)}" + (f" ({block.tag})" if block.tag else "")
+    return Extraction(block.text + "\n", record={"policy": policy_label("syntax"), "method": "parser",
+                                                 "source": where, "kept": ["the whole block"]})
 
 
 # --- continue mode --------------------------------------------------------------------------
