@@ -30,7 +30,7 @@ from harness.sandbox import make_sandbox
 from harness.sandbox.warm_compilers import HeaderCompiler, ServerCompiler
 from harness.vocabulary import LimitOverrides, Sample
 
-WARM_LANGUAGES = ("java", "typescript", "cpp")
+WARM_LANGUAGES = ("java", "typescript", "cpp", "csharp")
 
 
 def installed(language: str):
