@@ -19,7 +19,7 @@ ROOT = Path(__file__).resolve().parents[1]
 SLOW_MODULES = {
     "test_adversarial", "test_docker_sandbox", "test_ray_engine", "test_runtimes", "test_demo",
     "test_sandbox_isolation", "test_sandbox_cleanup", "test_sandbox_planted_links", "test_seccomp_filter",
-    "test_sandbox_none_host_mode", "test_sandbox_soak", "test_runtime_folders",
+    "test_sandbox_none_host_mode", "test_sandbox_soak", "test_runtime_folders", "test_extraction_corpus",
 }
 
 
