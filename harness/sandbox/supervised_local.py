@@ -84,13 +84,16 @@ class SupervisedWorkspace(LocalWorkspace):
                               infra_error=f"{argv[0]}: command not found in the sandbox (PATH={merged['PATH']})")
         slot, group = self.slot, self.slot.cgroup
         started = time.monotonic()
-        oom_before = None
+        oom_before = meter = None
         try:
-            oom_before, baseline = self.sandbox.fit_limits(slot, limits)
-            reply = slot.channel.call(
-                run_request(argv, merged, limits, stdin, full_stdout, rlimit_memory=group is None,
-                            rlimit_processes=group is None or not group.limits_processes),
-                limits.wall_seconds + STEP_GRACE_SECONDS)
+            oom_before, meter = self.sandbox.fit_limits(slot, limits)
+            try:
+                reply = slot.channel.call(
+                    run_request(argv, merged, limits, stdin, full_stdout, rlimit_memory=group is None,
+                                rlimit_processes=group is None or not group.limits_processes),
+                    limits.wall_seconds + STEP_GRACE_SECONDS)
+            finally:
+                peak = meter.stop() if meter is not None else None
         except (SupervisorTrouble, OSError) as exc:
             slot.spoiled = f"supervisor lost: {brief(exc)}"
             if group is not None and oom_before is not None and group.oom_kills() > oom_before:
@@ -106,8 +109,9 @@ class SupervisedWorkspace(LocalWorkspace):
             reply["oom_kills"] = 0
         result, spoiled = read_run_reply(reply, limits)
         slot.spoiled = slot.spoiled or spoiled
-        if baseline is not None:
-            result.extra["peak_memory_mb"] = round(max(0, group.peak_bytes() - baseline) / 2**20, 1)
+        if peak is not None:  # the group's peak; a sampled one at least the largest process's
+            sampled = 0 if meter.exact else result.extra.get("peak_memory_mb", 0)
+            result.extra["peak_memory_mb"] = max(round(peak / 2**20, 1), sampled)
         return result
 
 
@@ -254,11 +258,10 @@ class SupervisedLocalSandbox(LocalSandbox):
             raise
         return slot
 
-    def fit_limits(self, slot: Slot, limits: Limits) -> tuple[int, int | None]:
-        """Give the sandbox's cgroup the step's limits and restart its peak reading; returns
-        the group's memory-kill count so far (0 without a cgroup) and the memory in use before
-        the step, the supervisor's own (None where no per-step peak can be read: no cgroup,
-        or cgroup v2, which restarts a peak only per open file)."""
+    def fit_limits(self, slot: Slot, limits: Limits) -> tuple[int, cgroups.PeakMeter | None]:
+        """Give the sandbox's cgroup the step's limits and start a reading of the step's peak
+        memory (above what the supervisor holds); returns the group's memory-kill count so far
+        (0 without a cgroup) and the started meter (None without a cgroup; the caller stops it)."""
         group = slot.cgroup
         if group is None:
             return 0, None
@@ -266,8 +269,7 @@ class SupervisedLocalSandbox(LocalSandbox):
         if (memory, processes) != (slot.memory, slot.processes):
             group.set_limits(memory, processes, old_memory=slot.memory)
             slot.memory, slot.processes = memory, processes
-        baseline = group.usage_bytes() if group.reset_peak() else None
-        return group.oom_kills(), baseline
+        return group.oom_kills(), group.step_peak()
 
     def _group_limits(self, limits: Limits) -> tuple[int, int]:
         return (limits.memory_mb + SUPERVISOR_MB) * 2**20, limits.max_processes + self.supervisor_processes
