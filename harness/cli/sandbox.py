@@ -1,5 +1,6 @@
-"""``assay sandbox``: the Docker sandbox's resources (``clean`` removes containers left behind).
-Images are built by ``assay runtimes build``."""
+"""``assay sandbox``: what enforces the sandboxes' limits on this host (``doctor``), and the Docker
+sandbox's resources (``clean`` removes containers left behind). Images are built by ``assay
+runtimes build``."""
 
 from __future__ import annotations
 
@@ -8,11 +9,12 @@ from typing import Optional
 
 import typer
 
-from ..console import render
+from ..console import paint, render, use_colour
 from ..sandbox import SandboxUnavailable
 from .common import fail
 
-sandbox_app = typer.Typer(no_args_is_help=True, help="Manage sandbox resources (Docker containers).")
+sandbox_app = typer.Typer(no_args_is_help=True, help="Check what enforces the sandboxes' limits here; manage "
+                          "sandbox resources (Docker containers).")
 
 
 def docker_client():
@@ -52,3 +54,40 @@ def sandbox_clean(
     typer.echo(f"removed {len(removed)} container(s)", err=True)
 
 
+
+
+@sandbox_app.command("doctor")
+def sandbox_doctor(
+    as_json: bool = typer.Option(False, "--json", help="Print the report as JSON."),
+) -> None:
+    """Say which limits are enforced by what on this host, for the bubblewrap and none sandboxes:
+    cgroup version and controllers (or the rlimit fallback), swap, per-step peak memory, user
+    namespaces, seccomp, and whether a bubblewrap sandbox starts."""
+    from ..sandbox.hostlimits import doctor
+
+    report = doctor()
+    if as_json:
+        typer.echo(json.dumps(report, indent=2))
+        return
+    cgroup, limits = report["cgroup"], report["limits"]
+    version = f"v{cgroup['version']}" if cgroup["version"] else "none"
+    mechanism = f"cgroup {version}" if limits["cgroup_limits"] else "rlimits"
+    yes_no = {True: "yes", False: "NO"}
+    rows = [
+        ["cgroup hierarchy", version, f"{cgroup['mount']}: {' '.join(cgroup['controllers']) or 'no controllers'}"],
+        ["Assay's groups", "usable" if cgroup["usable"] else "NONE", cgroup.get("where") or cgroup.get("problem", "")],
+        ["memory limit", mechanism, limits["memory"]],
+        ["memory kills", "counted" if limits["cgroup_limits"] else "not counted", limits["oom_kills"]],
+        ["process limit", "cgroup" if limits["processes"].startswith("cgroup") else "rlimit", limits["processes"]],
+        ["swap", "capped" if limits["swap"].startswith("capped") else "not capped", limits["swap"]],
+        ["per-step peak", "whole group" if limits["cgroup_limits"] else "one process", limits["peak_memory"]],
+        ["user namespaces", yes_no[report["user_namespaces"]["available"]], report["user_namespaces"]["detail"]],
+        ["seccomp filter", yes_no[report["seccomp"]["available"]], report["seccomp"]["detail"]],
+        ["bubblewrap", yes_no[report["bubblewrap"]["available"]], report["bubblewrap"]["detail"]],
+    ]
+    typer.echo(render(["check", "state", "detail"], rows, align="lll"))
+    colour = use_colour()
+    for warning in report["warnings"]:
+        typer.echo(paint("warning: " + warning, "33", colour))
+    if not report["warnings"]:
+        typer.echo(f"memory and process limits are enforced by cgroup {version}")

@@ -18,6 +18,7 @@ import sys
 from pathlib import Path
 
 from ..vocabulary import RuntimeSandboxNeeds
+from . import hostlimits
 from .base import SandboxUnavailable
 from .cgroups import Cgroup
 from .local import BASE_PATH, candidate_env, private_folder
@@ -50,6 +51,7 @@ class BareSandbox(SupervisedLocalSandbox):
             "backend": self.name,
             "isolation": "none (unsafe baseline): candidates run as host processes with the invoking user's rights",
             "memory_limit": self.memory_mechanism(),
+            "enforcement": hostlimits.enforcement(self.cgroups),  # what `assay sandbox doctor` prints
             "supervisor": ("step supervisor (harness/sandbox/step_supervisor.py) in host mode, one plain child "
                            "process per worker: a child subreaper that kills only its own descendants"),
             "max_runs_per_sandbox": self.max_runs,

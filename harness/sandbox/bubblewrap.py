@@ -25,7 +25,7 @@ import subprocess
 import sys
 from pathlib import Path
 
-from . import seccomp
+from . import hostlimits, seccomp
 from ..vocabulary import RuntimeSandboxNeeds
 from .base import SandboxUnavailable
 from .cgroups import Cgroup
@@ -98,6 +98,7 @@ class BubblewrapSandbox(SupervisedLocalSandbox):
             "backend": self.name,
             "version": version,
             "memory_limit": self.memory_mechanism(),
+            "enforcement": hostlimits.enforcement(self.cgroups),  # what `assay sandbox doctor` prints
             "user": "nobody" if self.run_as == NOBODY else "invoking user",
             "isolation": ("warm sandbox per worker: network, pid, IPC, UTS, cgroup and user namespaces; "
                           "read-only system; /work, /tmp and /dev/shm emptied between candidates"),
