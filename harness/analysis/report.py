@@ -147,7 +147,7 @@ def build_report(run: Run, settings: Settings, tags: bool = True) -> dict:
     slowest = sorted(timed, key=lambda r: -r.get("run_seconds", r["seconds"]))[:SLOWEST]
     flaky_recorded = any("flaky" in r for r in run.rows)
     flaky_rows = [_brief_row(r) for r in run.rows if r.get("flaky")]
-    warnings = list(run.warnings)
+    warnings = list(run.warnings) + limit_warnings(run.manifest)
     if flaky_rows:
         warnings.append(f"{len(flaky_rows)} flaky candidate(s): repeated runs disagreed, so their recorded "
                         "verdict (the first run's) may not reproduce")
@@ -163,6 +163,23 @@ def build_report(run: Run, settings: Settings, tags: bool = True) -> dict:
         "warnings": warnings,
         "marks": MARKS,
     }
+
+
+def limit_warnings(manifest: dict | None) -> list[str]:
+    """A run whose memory limit was only a per-process rlimit (no writable cgroup on the scoring
+    host: see ``assay sandbox doctor``) says so: its memory_limit verdicts and its peaks are weaker.
+    Manifests before the sandbox recorded ``enforcement`` are read from its memory description."""
+    sandbox = (manifest or {}).get("sandbox") or {}
+    enforcement = sandbox.get("enforcement")
+    if isinstance(enforcement, dict):
+        rlimits_only = enforcement.get("cgroup_limits") is False
+    else:
+        rlimits_only = str(sandbox.get("memory_limit", "")).startswith("rlimits per step")
+    if not rlimits_only:
+        return []
+    return ["memory limit was only an address-space limit on each process (RLIMIT_DATA; no cgroup on the scoring "
+            "host): a candidate with several processes could use more, and memory_limit verdicts were read from "
+            "out-of-memory messages. Rerun with --require-cgroups on a host with cgroup limits to be sure."]
 
 
 def _brief_row(row: dict) -> dict:

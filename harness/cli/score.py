@@ -83,6 +83,9 @@ def score(
     all_cases: bool = typer.Option(False, "--all-cases", help="Whole-program problems: run every case even after "
                                    "one fails (default: stop at the first failing case)."),
     sandbox: str = typer.Option("bubblewrap", "--sandbox", help=f"Sandbox backend: {', '.join(backends())}."),
+    require_cgroups: bool = typer.Option(False, "--require-cgroups", help="Refuse to start unless this host's "
+                                         "sandboxes get real cgroup memory and process limits (not the rlimit "
+                                         "fallback); see assay sandbox doctor."),
     label: Optional[str] = typer.Option(None, "--label", help="Checkpoint label recorded in the manifest."),
     repeat: int = typer.Option(1, "--repeat", min=1, help="Run each candidate N times; disagreeing "
                                "verdicts mark it flaky (the first run's verdict is recorded)."),
@@ -129,6 +132,12 @@ def score(
                            repeat=repeat, cache_dir=cache, extract=extract_policy,
                            programs=ProgramOptions(mode=program_mode, all_cases=all_cases))
     with open_sandbox(sandbox) as box:
+        if require_cgroups:
+            from ..sandbox.hostlimits import refusal
+
+            refused_because = refusal(box)
+            if refused_because:
+                fail(f"--require-cgroups: {refused_because}")
         try:
             outcome = run_score(options, problem_set, runtimes, box, engine_factory=where)
         except (StoreBusy, StoreMismatch, EngineError) as exc:
