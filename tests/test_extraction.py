@@ -388,3 +388,14 @@ def test_a_python_program_block_beats_a_shell_block_and_keeps_its_main_guard():
               "    print(sum(map(int, sys.stdin.read().split())))\n\nif __name__ == '__main__':\n    main()\n```")
     done = _program("python", answer)
     assert "if __name__ == '__main__':" in done.code and done.record["source"] == "block 2 of 2 (python)"
+
+
+def test_a_continuation_keeps_includes_written_before_its_helper(core):
+    """C++ allows #include anywhere at file scope; a base model often adds one before a helper."""
+    body = ("    return helper(fracs);\n}\n\n#include <sys/socket.h>\n#include <vector>\n\n"
+            "std::pair<int64_t, int64_t> helper(const std::vector<std::pair<int64_t, int64_t>>& f) {\n"
+            "    return {0, 1};\n}\n\nint main() { return 0; }\n")
+    done = run("cpp", "add_fractions", "continue", body, core)
+    assert "#include <sys/socket.h>" in done.code and "helper(const std::vector" in done.code
+    assert done.code.count("#include <vector>") == 1  # the prompt has it already
+    assert "int main" not in done.code

@@ -412,7 +412,11 @@ def _continue(request: ExtractionRequest) -> Extraction:
     kept = _not_redefined(kept, target, _preamble_imports(spec, request.preamble))[0]
     imports = []
     if spec.late_imports == "keep":
-        imports = [i for i in later if i.kind == "import"]
+        # Written after the function but legal there (an #include, a use, a require): kept unless
+        # the prompt already has it, so that binding a name twice cannot break the build.
+        before = _preamble_imports(spec, request.prompt)
+        used = set().union(target.refs, *(i.refs for i in kept))
+        imports = [i for i in later if i.kind == "import" and not _import_drop_reason(spec, i, before, used)]
     chosen = [i for i in later if i in kept or i in imports]
     dropped = [(i.label if i.kind != "other" else _short(i.text)) for i in later if i not in chosen]
     tail = source[target_node.end_byte:]
