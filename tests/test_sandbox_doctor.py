@@ -86,7 +86,8 @@ def test_require_cgroups_lets_a_run_with_cgroup_limits_start(tmp_path, tiny_set)
     if cgroups.detect() is None:
         pytest.skip("no writable cgroup here: tests/test_rootless.py covers the refusal end to end")
     dump = tmp_path / "dump.jsonl"
-    dump.write_text(json.dumps({"problem": "add_pair", "language": "python", "completion": "    return a + b\n"}) + "\n")
+    row = {"problem": "add_pair", "language": "python", "completion": "    return a + b\n"}
+    dump.write_text(json.dumps(row) + "\n")
     out = tmp_path / "out"
     done = assay("score", dump, "--set", tiny_set, "--out", out, "--require-cgroups", "-q")
     assert done.returncode == 0, done.stderr
