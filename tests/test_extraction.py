@@ -399,3 +399,15 @@ def test_a_continuation_keeps_includes_written_before_its_helper(core):
     assert "#include <sys/socket.h>" in done.code and "helper(const std::vector" in done.code
     assert done.code.count("#include <vector>") == 1  # the prompt has it already
     assert "int main" not in done.code
+
+
+def test_text_that_a_grammar_parses_in_quadratic_time_falls_back_within_a_budget():
+    """tree-sitter-perl needs seconds for a list of a few thousand numbers and about a minute for
+    20,000 (measured here): such a text is given up on, the same way on every machine."""
+    runtime = load_runtime("perl")
+    text = "    my $filler = [" + "1, " * 4000 + "];\n    return $a_ + $b_;\n}\n"
+    request = ExtractionRequest("continue", text, "sub add_pair {\n    my ($a_, $b_) = @_;\n", "", "add_pair", 2,
+                                runtime.stop_sequences, runtime.extraction)
+    done = extract(request)
+    assert done.record["method"] == "stop_sequences" and "more parsing work" in done.record["why"]
+    assert extract(request).record == done.record  # deterministic

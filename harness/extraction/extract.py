@@ -16,7 +16,7 @@ from functools import lru_cache
 
 from .fences import Block, fenced_blocks
 from .spec import ExtractionSpec
-from .syntax import GrammarMissing, Item, functions_named, item_of, items_of, parameter_range, parse
+from .syntax import GrammarMissing, ParseBudgetExceeded, Item, functions_named, item_of, items_of, parameter_range, parse
 
 POLICY_VERSION = 1
 EXTRACTION_POLICIES = ("syntax", "strict")
@@ -70,7 +70,7 @@ def extract(request: ExtractionRequest) -> Extraction:
         if request.mode == "continue":
             return _continue(request)
         return _whole(request)
-    except GrammarMissing as exc:
+    except (GrammarMissing, ParseBudgetExceeded) as exc:
         return _textual(request, str(exc))
     except RecursionError:
         return _textual(request, "the text nests too deeply to parse")

@@ -9,6 +9,7 @@ from __future__ import annotations
 import importlib
 import re
 import threading
+import time
 import warnings
 from dataclasses import dataclass, field
 from functools import cached_property, lru_cache
@@ -45,14 +46,47 @@ def language(module: str, function: str) -> tree_sitter.Language:
         return tree_sitter.Language(entry())
 
 
+class ParseBudgetExceeded(RuntimeError):
+    """The grammar needed far more work than text of this size takes (some grammars are
+    quadratic on hostile input: tree-sitter-perl on a list of 20,000 numbers takes a minute)."""
+
+
+# The parser reads the text through a callback, a chunk at a time, and asks again for what it
+# reads twice. Ordinary code takes a few calls per chunk (Perl's scanner up to ~300); a text that
+# needs more than the budget below is given up on, deterministically: the same text is given up
+# on on every machine. The wall-clock cap is a last resort for work the reads do not show.
+READ_CHUNK = 4096
+READS_PER_CHUNK = 400
+MIN_READS = 5_000
+PARSE_WALL_SECONDS = 5.0
+
+
 def parse(spec: ExtractionSpec, source: bytes) -> tree_sitter.Tree:
-    """Parsers are not thread-safe: each thread keeps its own per grammar."""
+    """Parsers are not thread-safe: each thread keeps its own per grammar. Raises
+    ParseBudgetExceeded when the text needs more work than its size warrants."""
     parsers = _local.__dict__.setdefault("parsers", {})
     key = (spec.grammar, spec.grammar_function)
     parser = parsers.get(key)
     if parser is None:
         parser = parsers[key] = tree_sitter.Parser(language(*key))
-    return parser.parse(source)
+    budget = max(MIN_READS, READS_PER_CHUNK * (len(source) // READ_CHUNK + 1))
+    deadline = time.monotonic() + PARSE_WALL_SECONDS
+    reads = 0
+    exceeded = False
+
+    def read(offset: int, _point) -> bytes:
+        nonlocal reads, exceeded
+        reads += 1
+        if exceeded or reads > budget or (reads % 256 == 0 and time.monotonic() > deadline):
+            exceeded = True
+            return b""  # an end of input: the parser finishes at once
+        return source[offset:offset + READ_CHUNK]
+
+    tree = parser.parse(read)
+    if exceeded:
+        raise ParseBudgetExceeded(f"the text needs more parsing work than its size warrants "
+                                  f"(over {budget:,} reads of {len(source):,} bytes)")
+    return tree
 
 
 @dataclass(eq=False)
