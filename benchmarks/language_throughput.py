@@ -2,8 +2,9 @@
 backend with cold compilers, and each with warm ones (compile.warm in runtime.yaml).
 
 (a) ``bare``: the toolchain alone, no sandbox and no harness: the rendered program is written
-to a fresh folder and the runtime's compile and run commands run there as plain processes
-(each candidate with empty caches, as in a sandbox). (b) ``<backend> cold``: the real Executor
+to a fresh folder in RAM beforehand, and the runtime's compile and run commands run there as
+plain processes (each candidate with empty caches, as in a sandbox); only those are timed, the
+rendering and judging are not. (b) ``<backend> cold``: the real Executor
 (render, compile, run, read the results, judge) with ``warm=False``. (c) ``<backend> warm``:
 the same with the runtime's warm compiler (for a runtime that declares none it is the cold
 path again, and the table says so).
@@ -12,8 +13,9 @@ One run, one workload per language: the conformance references, cycled to ``--ca
 No two candidates share a verdict or a compiled program: every execution renders a fresh
 nonce into the test driver, so every source differs, and nothing is cached by program. The
 configurations take turns in rounds, so a load change on a shared machine hits all of them
-alike; each starts with an untimed warm-up (sandboxes and compile servers started, the
-precompiled header built). Prints ms per candidate and the ratio to the bare toolchain, and for
+alike; a language's rounds run one after another, so its compile servers stay warm (an idle
+one ends after two minutes); each configuration starts with an untimed warm-up (sandboxes
+and compile servers started and warmed up, the precompiled header built). Prints ms per candidate and the ratio to the bare toolchain, and for
 the interpreted languages the overhead in ms over bare. Targets (issue 15): warm Java and
 TypeScript <= 0.25x bare, C++ <= 0.5x, Rust, Go and C# <= 0.8x; interpreted languages under
 bubblewrap within 5 ms of bare.
@@ -26,25 +28,25 @@ from __future__ import annotations
 
 import argparse
 import concurrent.futures as futures
-import os
+import secrets
 import shutil
 import subprocess
 import sys
 import tempfile
 import time
-from collections import Counter, defaultdict
+from collections import Counter
 from pathlib import Path
 
 ROOT = Path(__file__).resolve().parents[1]
 sys.path.insert(0, str(ROOT))
 
 from harness.console import render  # noqa: E402
-from harness.engine.execution import Executor  # noqa: E402
+from harness.engine.execution import Executor, judge  # noqa: E402
 from harness.problems import load_problem_set  # noqa: E402
 from harness.runtimes import available_runtimes, load_runtime  # noqa: E402
 from harness.sandbox import SandboxUnavailable, make_sandbox  # noqa: E402
 from harness.sandbox.local import candidate_env, default_work_root  # noqa: E402
-from harness.vocabulary import Sample  # noqa: E402
+from harness.vocabulary import Sample, StepResult  # noqa: E402
 
 TARGETS = {"java": 0.25, "typescript": 0.25, "cpp": 0.5, "rust": 0.8, "go": 0.8, "csharp": 0.8}
 INTERPRETED_MS = 5.0
@@ -57,36 +59,53 @@ def workload(runtime, problems, count: int) -> list[Sample]:
             for i, (pid, completion) in enumerate(references[i % len(references)] for i in range(count))]
 
 
-def bare_candidate(executor: Executor, runtime, sample: Sample, scratch: Path) -> bool:
-    """Compile and run one candidate with the toolchain alone; True when it passed."""
-    from harness.engine.execution import judge
-    from harness.vocabulary import StepResult
-    import secrets
+class BareCandidate:
+    """One candidate for the bare toolchain: its program rendered into a fresh folder in RAM
+    beforehand, so that only the toolchain's own work is timed (``toolchain``), and judged
+    afterwards (``passed``)."""
 
-    folder = Path(tempfile.mkdtemp(prefix="bare-", dir=scratch))
-    try:
-        nonce = secrets.token_hex(16)
-        results_file = f".results-{nonce[:12]}.jsonl"
-        (folder / runtime.source_file).write_text(executor.program(sample, nonce, results_file), encoding="utf-8")
-        tmp = folder / ".tmp"
+    def __init__(self, executor: Executor, runtime, sample: Sample, scratch: Path):
+        self.runtime, self.sample, self.executor = runtime, sample, executor
+        self.folder = Path(tempfile.mkdtemp(prefix="bare-", dir=scratch))
+        self.nonce = secrets.token_hex(16)
+        self.results_file = f".results-{self.nonce[:12]}.jsonl"
+        (self.folder / runtime.source_file).write_text(executor.program(sample, self.nonce, self.results_file),
+                                                       encoding="utf-8")
+        tmp = self.folder / ".tmp"
         tmp.mkdir()
-        env = candidate_env(runtime.needs, {}, home=str(folder), tmp=str(tmp))
-        for key, value in env.items():  # the runtime's private caches, fresh for each candidate
+        self.env = candidate_env(runtime.needs, {}, home=str(self.folder), tmp=str(tmp))
+        for key, value in self.env.items():  # the runtime's private caches, fresh for each candidate
             if value.startswith("/tmp/"):
-                env[key] = str(tmp / value[len("/tmp/"):])
-        if runtime.compile:
-            built = subprocess.run(list(runtime.compile.command), cwd=folder, env=env, capture_output=True)
+                self.env[key] = str(tmp / value[len("/tmp/"):])
+        self.ran: subprocess.CompletedProcess | None = None
+
+    def toolchain(self) -> None:
+        """Compile and run, plain processes, nothing else. Each in a session of its own, as every
+        sandboxed step is: with the kernel's autogroup scheduling (sched_autogroup_enabled) a
+        loaded machine shares CPU between sessions, so steps left in the harness's session
+        would get a smaller share than sandboxed ones and make the baseline look slow."""
+        if self.runtime.compile:
+            built = subprocess.run(list(self.runtime.compile.command), cwd=self.folder, env=self.env,
+                                   capture_output=True, start_new_session=True)
             if built.returncode != 0:
+                return
+        self.ran = subprocess.run(list(self.runtime.run.command), cwd=self.folder, env=self.env, capture_output=True,
+                                  start_new_session=True)
+
+    def passed(self) -> bool:
+        try:
+            if self.ran is None:
                 return False
-        ran = subprocess.run(list(runtime.run.command), cwd=folder, env=env, capture_output=True)
-        step = StepResult(exit_code=ran.returncode, stdout=ran.stdout.decode("utf-8", "replace"),
-                          stderr=ran.stderr.decode("utf-8", "replace"))
-        results = (folder / results_file).read_bytes() if (folder / results_file).exists() else b""
-        problem = executor.problems.problems[sample.problem]
-        verdict = judge(problem, runtime, step, results, nonce, runtime.step_limits("run", problem.limits))
-        return verdict.outcome == "passed"
-    finally:
-        shutil.rmtree(folder, ignore_errors=True)
+            step = StepResult(exit_code=self.ran.returncode, stdout=self.ran.stdout.decode("utf-8", "replace"),
+                              stderr=self.ran.stderr.decode("utf-8", "replace"))
+            path = self.folder / self.results_file
+            results = path.read_bytes() if path.exists() else b""
+            problem = self.executor.problems.problems[self.sample.problem]
+            verdict = judge(problem, self.runtime, step, results, self.nonce,
+                            self.runtime.step_limits("run", problem.limits))
+            return verdict.outcome == "passed"
+        finally:
+            shutil.rmtree(self.folder, ignore_errors=True)
 
 
 def main() -> int:
@@ -132,30 +151,35 @@ def main() -> int:
 
     def run(config: str, language: str, part: list[Sample], pool) -> tuple[float, int]:
         executor = configs[config].get(language)
+        if executor is None:  # the toolchain alone: rendering before, judging after the clock
+            bare = [BareCandidate(plain[language], runtimes[language], sample, scratch) for sample in part]
+            began = time.perf_counter()
+            list(pool.map(BareCandidate.toolchain, bare))
+            spent = time.perf_counter() - began
+            return spent, sum(not candidate.passed() for candidate in bare)
         began = time.perf_counter()
-        if executor is None:
-            results = list(pool.map(lambda s: bare_candidate(plain[language], runtimes[language], s, scratch), part))
-        else:
-            results = [v.outcome == "passed" for v in pool.map(executor.execute, part)]
+        results = [v.outcome == "passed" for v in pool.map(executor.execute, part)]
         return time.perf_counter() - began, sum(not ok for ok in results)
 
     try:
         with futures.ThreadPoolExecutor(max_workers=args.jobs) as pool:
-            for config in configs:  # warm-up, untimed
-                for language, runtime in runtimes.items():
+            chunk = -(-args.candidates // args.rounds)
+            for language, runtime in runtimes.items():  # a language's configurations close in time
+                for config in configs:  # warm-up, untimed
                     executor = configs[config].get(language)
                     if executor is not None:
                         if hasattr(executor.sandbox, "warm"):
                             executor.sandbox.warm(runtime.needs, args.jobs)
                         if runtime.compile is not None:
+                            # Servers started and warmed up on a program of this workload.
+                            example = {runtime.source_file: executor.program(samples[language][0], "0" * 32,
+                                                                              ".results-warmup.jsonl").encode()}
                             compiler = (executor.compilers.prepare(runtime, runtime.step_limits("compile"),
-                                                                   servers=args.jobs)
+                                                                   servers=args.jobs, example=example)
                                         if executor.compilers is not None else executor.compiler_for(runtime, None))
                             how[config, language] = compiler.describe()
                     run(config, language, samples[language][: 2 * args.jobs], pool)
-            chunk = -(-args.candidates // args.rounds)
-            for start in range(0, args.candidates, chunk):
-                for language in runtimes:
+                for start in range(0, args.candidates, chunk):
                     for config in configs:
                         spent, bad = run(config, language, samples[language][start:start + chunk], pool)
                         seconds[config, language] += spent

@@ -6,7 +6,8 @@ g++) run cold, as the runtime's compile.command, in the same sandbox backend: a 
 must equal the cold one in outcome, cases passed and detail, compile errors' messages
 included. The default run compares a representative subset (references, and every wrong
 program of checks.yaml that fails to compile); the full comparison (the conformance and core
-references and every checks.yaml entry, per language) is marked slow.
+references and every checks.yaml entry, per language) is marked slow and runs when
+ASSAY_WARM_FULL=1 is set, as it takes minutes.
 """
 
 from __future__ import annotations
@@ -17,6 +18,7 @@ import os
 import re
 import shutil
 import tempfile
+import time
 from pathlib import Path
 
 import pytest
@@ -88,12 +90,14 @@ def compare(box, runtime, set_name: str, samples: list[Sample], jobs: int = 2) -
 @pytest.mark.parametrize("language", WARM_LANGUAGES)
 def test_warm_verdicts_equal_cold_ones_on_a_representative_subset(box, language):
     runtime = installed(language)
-    samples = references(runtime, "conformance")[:2] + wrong_programs(runtime, "compile_error")
-    samples += wrong_programs(runtime, "wrong_answer")[:1] + wrong_programs(runtime, "runtime_error")[:1]
+    # A reference, and every wrong program that fails to compile: their messages must match.
+    samples = references(runtime, "conformance")[:1] + wrong_programs(runtime, "compile_error")
     compare(box, runtime, "conformance", samples)
 
 
 @pytest.mark.slow
+@pytest.mark.skipif(os.environ.get("ASSAY_WARM_FULL") != "1",
+                    reason="about 5 minutes on 2 cores: set ASSAY_WARM_FULL=1 (kept out of CI's time)")
 @pytest.mark.parametrize("language", WARM_LANGUAGES)
 def test_warm_verdicts_equal_cold_ones_on_every_reference_and_wrong_program(box, language):
     runtime = installed(language)
@@ -134,8 +138,11 @@ def test_a_compile_over_its_time_limit_times_out_and_retires_the_server(tmp_path
         assert len(compiler.idle) == 1
         server = compiler.idle[0]
         warm = warm_executor.execute(sample)
-        assert server.process.poll() is not None  # retired: ended, and not handed out again
-        assert server not in compiler.idle
+        assert server not in compiler.idle  # retired: not handed out again, and ended
+        deadline = time.monotonic() + 30
+        while server.process.poll() is None and time.monotonic() < deadline:
+            time.sleep(0.1)
+        assert server.process.poll() is not None
     # The cold command under the same limit is the reference (javac run as a step).
     assert shown(warm) == shown(cold)
     assert (warm.outcome, warm.detail) == ("compile_error", "compilation exceeded its time limit (0.01s)")
@@ -144,7 +151,7 @@ def test_a_compile_over_its_time_limit_times_out_and_retires_the_server(tmp_path
 def test_a_crashed_server_is_retired_and_the_candidate_compiles_cold():
     runtime = installed("typescript")
     problems = load_problem_set("conformance")
-    samples = references(runtime, "conformance")[:2] + wrong_programs(runtime, "compile_error")[:1]
+    samples = references(runtime, "conformance")[:1] + wrong_programs(runtime, "compile_error")[:1]
     with make_sandbox("bubblewrap") as sandbox:
         sandbox.check()
         cold = [Executor(sandbox, problems, {"typescript": runtime}, warm=False).execute(s) for s in samples]

@@ -4,12 +4,14 @@ A runtime may declare one in runtime.yaml (``compile.warm``, docs/runtime-format
 declares none, or a backend without warm compilers, compiles cold as before. Two kinds:
 
 * ``server``: a long-lived compiler process (javac's API in one JVM, the TypeScript compiler's
-  API in one Node process) in a sandbox of its own, apart from the sandboxes where candidates
+  API in one Node process, mcs.exe in one Mono process) in a sandbox of its own, apart from the sandboxes where candidates
   run: the backend's isolation (bubblewrap's namespaces and seccomp filter; none for ``none``),
   no network, no host files beyond the system and the runtime's own read-only paths, a cgroup
   or rlimits at the compile step's limits. It is fed the cold compile command and the source
   and never runs what it compiles; the files it made are the only thing copied into the
-  candidate's workspace, where the run step runs as before.
+  candidate's workspace, where the run step runs as before. One starts in the background when
+  a candidate finds none idle (that candidate compiles cold), and compiles that candidate's
+  files WARM_UP_COMPILES times before it serves, so its JIT is warm.
 * ``precompiled_header``: a header of the runtime compiled once per toolchain (its key is the
   header's text, the build command and the compiler's identity) into a cache folder, which
   the candidate's own compile step, still in the candidate's sandbox, reads read-only.
@@ -26,13 +28,12 @@ from __future__ import annotations
 import concurrent.futures as futures
 import contextlib
 import hashlib
-import logging
 import os
+import resource
 import select
 import shutil
 import signal
 import subprocess
-import sys
 import tempfile
 import threading
 import time
@@ -46,10 +47,13 @@ from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
 from .cgroups import Cgroup
 from .local import LOG, LocalWorkspace, candidate_env, default_work_root, private_folder, remove_folder
 from .process import join_and_drop
-from .step_supervisor import KEEP_BYTES, keep_tail, write_new_file
+from .step_supervisor import keep_tail, write_new_file
 
 ENABLE_ENV = "ASSAY_WARM_COMPILERS"
 MAX_USES = 500  # compiles one server serves before a fresh one replaces it
+WARM_UP_COMPILES = 20  # compiles of the first candidate's files before a new server serves
+WARM_UP_SECONDS = 10.0  # for each of them
+MAX_TROUBLES = 10  # servers failing one compile after another: the runtime stays cold from then on
 IDLE_SECONDS = 120.0  # a server nobody used for this long is ended
 START_SECONDS = 60.0  # for a server's first answer (a JVM compiling the server's own source)
 POLL_SECONDS = 0.2  # how often a compile's CPU time is read
@@ -105,8 +109,8 @@ class ColdCompiler:
 
 
 # --- the server protocol ----------------------------------------------------------------------
-# Every field is its length in bytes as decimal digits, a newline, then the bytes (the helpers
-# in runtimes/java/warm/ and runtimes/typescript/warm/ say the same).
+# Every field is its length in bytes as decimal digits, a newline, then the bytes (the servers
+# in runtimes/java/warm/, runtimes/typescript/warm/ and runtimes/csharp/warm/ say the same).
 
 def frame(data: bytes | str | int) -> bytes:
     raw = data if isinstance(data, bytes) else str(data).encode("utf-8")
@@ -121,7 +125,8 @@ def compile_request(argv: list[str], files: dict[str, bytes]) -> bytes:
 
 
 class FieldReader:
-    """Fields from a server's stdout, each by a deadline (ServerTrouble after it, or at EOF)."""
+    """Fields from a server's stdout, each by a deadline (TimeoutError after it; ServerTrouble
+    at EOF or on a garbled field). ``wait`` runs while nothing arrives (the CPU watch)."""
 
     def __init__(self, fd: int):
         self.fd = fd
@@ -272,9 +277,7 @@ class LocalLauncher:
         drop = join_and_drop(group, self.run_as)
         rlimit_memory = group is None
 
-        def preexec() -> None:
-            import resource
-
+        def preexec() -> None:  # plain system calls only: it runs in a fork of a threaded process
             drop()
             file_bytes = limits.max_file_mb * 2**20
             resource.setrlimit(resource.RLIMIT_FSIZE, (file_bytes, file_bytes))
@@ -350,7 +353,8 @@ class ServerCompiler:
         self.limits: Limits | None = None
         self.idle: list[Server] = []
         self.starting = 0
-        self.failures = 0
+        self.failures = 0  # servers that did not start, in a row
+        self.troubles = 0  # compiles a server failed (crashed, broke the protocol), in a row
         self.lock = threading.Lock()
         self.warm_compiles = 0
 
@@ -358,7 +362,9 @@ class ServerCompiler:
         return f"warm compile server: {' '.join(self.command)}"
 
     # -- the pool --
-    def _take(self, limits: Limits) -> Server | None:
+    def _take(self, limits: Limits, example: dict[str, bytes]) -> Server | None:
+        """An idle server, or None: then one is started in the background (when none is
+        starting already), warmed up on ``example``, the files of the candidate that asked."""
         with self.lock:
             if self.limits is not None and self.limits != limits:
                 stale, self.idle = self.idle, []  # another step's limits: servers start afresh
@@ -367,25 +373,35 @@ class ServerCompiler:
             self.limits = limits
             if self.idle:
                 return self.idle.pop()
-            if self.starting == 0 and self.failures < 3 and not self.owner.closed:
+            if self.starting == 0 and self.failures < 3 and self.troubles < MAX_TROUBLES and not self.owner.closed:
                 self.starting += 1
-                self.owner.background(lambda: self._start(limits))
+                self.owner.background(lambda: self._start(limits, example))
         return None
 
-    def _start(self, limits: Limits) -> None:
-        server = None
+    def _start(self, limits: Limits, example: dict[str, bytes] | None = None) -> None:
+        server, broken = None, False  # broken: the server itself could not start
         try:
             server = self.owner.launcher.start(self.needs, self.command, self.files, limits)
             self._wait_ready(server)
+            if example:
+                try:
+                    self._warm_up(server, example, limits)
+                except (ServerTrouble, OSError, ValueError) as exc:  # the example's fault (a bomb?)
+                    LOG.info("assay: %s compile server's warm-up failed (%s); a later candidate starts another",
+                             self.name, exc)
+                    self.owner.retire(server)
+                    server = None
         except Exception as exc:  # noqa: BLE001 - logged; candidates compile cold
             LOG.warning("assay: %s compile server did not start: %s", self.name, exc)
             if server is not None:
                 self.owner.retire(server)
-            server = None
+            server, broken = None, True
         with self.lock:
             self.starting -= 1
-            if server is None:
+            if broken:
                 self.failures += 1
+            elif server is None:
+                pass
             elif self.owner.closed or self.limits != limits:
                 self.owner.retire(server)
             else:
@@ -406,15 +422,29 @@ class ServerCompiler:
         if answer != b"ready":
             raise ServerTrouble(f"the server said {answer[:80]!r}, not 'ready'")
 
-    def start_now(self, limits: Limits, count: int) -> int:
-        """Start up to ``count`` servers and wait for them (a run's or a benchmark's warm-up);
-        how many are idle now."""
+    def _warm_up(self, server: Server, files: dict[str, bytes], limits: Limits) -> None:
+        """Compile ``files`` WARM_UP_COMPILES times before the server serves anyone: a JIT
+        (HotSpot's, V8's, Mono's) makes the compiler fast only after it has run a while, and
+        that cost is better paid in the background than by the first candidates."""
+        for _ in range(WARM_UP_COMPILES):
+            server.process.stdin.write(compile_request(list(self.cold.command), files))
+            server.process.stdin.flush()
+            try:
+                status = self._reply(server, time.monotonic() + min(limits.wall_seconds, WARM_UP_SECONDS))[0]
+            except TimeoutError:
+                raise ServerTrouble("a warm-up compile did not end in time") from None
+            if status not in (0, 1, 2):
+                raise ServerTrouble(f"a warm-up compile ended with status {status}: {server.last_words()}")
+
+    def start_now(self, limits: Limits, count: int, example: dict[str, bytes] | None = None) -> int:
+        """Start up to ``count`` servers, warmed up on ``example`` (file name -> bytes), and wait
+        for them (a benchmark's or a test's warm-up); how many are idle now."""
         with self.lock:
             self.limits = self.limits or limits
             wanted = max(0, count - len(self.idle) - self.starting)
             self.starting += wanted
         with futures.ThreadPoolExecutor(max_workers=max(1, wanted)) as starting:
-            list(starting.map(lambda _: self._start(limits), range(wanted)))
+            list(starting.map(lambda _: self._start(limits, example), range(wanted)))
         with self.lock:
             return len(self.idle)
 
@@ -441,7 +471,7 @@ class ServerCompiler:
 
     # -- one compile --
     def compile(self, space, source_file: str, source: str, limits: Limits) -> StepResult:
-        server = self._take(limits)
+        server = self._take(limits, {source_file: source.encode("utf-8")})
         if server is None or not isinstance(space, LocalWorkspace):
             if server is not None:
                 self._give_back(server)
@@ -462,6 +492,11 @@ class ServerCompiler:
         except (ServerTrouble, OSError, ValueError) as exc:
             memory = server.cgroup is not None and server.cgroup.oom_kills() > oom_before
             self.owner.retire(server)
+            with self.lock:
+                self.troubles += 1
+                if self.troubles == MAX_TROUBLES:
+                    LOG.warning("assay: %s: %d compile servers failed in a row; compiling cold from now on",
+                                self.name, MAX_TROUBLES)
             LOG.info("assay: %s compile server retired (%s); compiling cold", self.name,
                      "memory limit" if memory else f"{exc}: {server.last_words()}")
             return self.cold.compile(space, source_file, source, limits)
@@ -480,7 +515,9 @@ class ServerCompiler:
             return result
         for name, data in made.items():
             write_new_file(str(space.path), name, data, owner=space.owner)
-        self.warm_compiles += 1
+        with self.lock:
+            self.warm_compiles += 1
+            self.troubles = 0
         return result
 
     def _cpu_watch(self, server: Server, before: float, limits: Limits):
@@ -676,14 +713,14 @@ class WarmCompilers:
                                 f"cold (no precompiled headers for the {backend} backend)")
         return HeaderCompiler(self, runtime, spec)
 
-    def prepare(self, runtime, limits: Limits, servers: int = 0) -> Compiler:
+    def prepare(self, runtime, limits: Limits, servers: int = 0, example: dict[str, bytes] | None = None) -> Compiler:
         """The runtime's compiler, ready for a candidate (a precompiled header built first;
-        ``servers`` compile servers started and waited for)."""
+        ``servers`` compile servers started, warmed up on ``example``, and waited for)."""
         found = self.compiler(runtime)
         if isinstance(found, HeaderCompiler):
             found.prepare(limits)
         elif isinstance(found, ServerCompiler) and servers:
-            found.start_now(limits, servers)
+            found.start_now(limits, servers, example)
         return found
 
     def describe(self) -> dict[str, str]:
@@ -697,8 +734,10 @@ class WarmCompilers:
             job()
 
     def retire(self, server: Server) -> None:
-        if self.launcher is not None:
-            self.launcher.end(server)
+        """End a server in the background (its clean-up may wait for a dying process)."""
+        launcher = self.launcher
+        if launcher is not None:
+            self.background(lambda: launcher.end(server))
 
     def _expire_idle(self) -> None:
         while not self.closed:
