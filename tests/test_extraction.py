@@ -411,3 +411,15 @@ def test_text_that_a_grammar_parses_in_quadratic_time_falls_back_within_a_budget
     done = extract(request)
     assert done.record["method"] == "stop_sequences" and "more parsing work" in done.record["why"]
     assert extract(request).record == done.record  # deterministic
+
+
+def test_an_init_that_sets_up_a_kept_variable_is_kept_and_one_that_does_not_is_dropped(core):
+    """Go runs every init function before main (The Go Programming Language Specification,
+    "Package initialization", from memory): one that fills a map the solution uses belongs to it."""
+    answer = ("```go\nvar weights map[string]int\n\nfunc init() {\n\tweights = map[string]int{\"a\": 1}\n}\n\n"
+              "func init() {\n\tpanic(\"unrelated\")\n}\n\n"
+              "func CheapestPassage(a int) int {\n\treturn weights[\"a\"] + a\n}\n```")
+    runtime = load_runtime("go")
+    request = ExtractionRequest("whole", answer, "", "", "CheapestPassage", 1, (), runtime.extraction)
+    done = extract(request)
+    assert "weights = map[string]int" in done.code and "unrelated" not in done.code

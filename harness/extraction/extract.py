@@ -266,13 +266,21 @@ def _closure(request: ExtractionRequest, items: list[Item], target: Item) -> lis
             by_name.setdefault(item.name, []).append(item)
     chosen = {id(target)}
     pending = [(name, target) for name in target.refs]
+    initializers = [i for i in items if i.kind == "function" and i.name in spec.initializers]
     while pending:
-        name, user = pending.pop()
-        for item in by_name.get(name, []):
-            if item.inner.type in spec.lexical and item.node.start_byte > user.node.start_byte:
-                continue  # out of the user's scope: a script's `my $start = <STDIN>` after the sub
-            if id(item) not in chosen and (item.kind != "function" or item.name != request.function
-                                           or item.accepts(request.param_count)):
+        while pending:
+            name, user = pending.pop()
+            for item in by_name.get(name, []):
+                if item.inner.type in spec.lexical and item.node.start_byte > user.node.start_byte:
+                    continue  # out of the user's scope: a script's `my $start = <STDIN>` after the sub
+                if id(item) not in chosen and (item.kind != "function" or item.name != request.function
+                                               or item.accepts(request.param_count)):
+                    chosen.add(id(item))
+                    pending.extend((n, item) for n in item.refs)
+        # A function the language runs by itself (Go's init) goes with what it sets up.
+        kept_names = {i.name for i in items if id(i) in chosen and i.name}
+        for item in initializers:
+            if id(item) not in chosen and (item.refs - {item.name}) & kept_names:
                 chosen.add(id(item))
                 pending.extend((n, item) for n in item.refs)
     return [i for i in items if id(i) in chosen]

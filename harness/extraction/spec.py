@@ -41,6 +41,9 @@ class ExtractionSpec:
     # Definitions seen only by code after them (a `local` in Lua, a `my` in Perl): one written
     # after the code that names it is not what that code means.
     lexical: frozenset[str] = frozenset()
+    # Functions the language calls by itself before the program starts (Go's init): kept when
+    # they name something kept, since they set it up.
+    initializers: frozenset[str] = frozenset()
 
     def defines(self, node_type: str) -> bool:
         return node_type in self.functions or node_type in self.definitions
@@ -52,7 +55,7 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         raise ExtractionSpecError("expected a mapping")
     known = {"grammar", "tags", "functions", "definitions", "imports", "transparent", "inner_only", "wrappers",
              "entry_points", "import_naming", "unused_imports", "late_imports", "parameters",
-             "skip_parameters", "attributes", "lexical"}
+             "skip_parameters", "attributes", "lexical", "initializers"}
     unknown = set(raw) - known
     if unknown:
         raise ExtractionSpecError(f"unknown field(s) {', '.join(sorted(unknown))}; known: {', '.join(sorted(known))}")
@@ -120,4 +123,5 @@ def parse_extraction_spec(raw: object) -> ExtractionSpec:
         parameters=names("parameters", ["parameters"]),
         skip_parameters=frozenset(names("skip_parameters")),
         lexical=frozenset(names("lexical")),
+        initializers=frozenset(names("initializers")),
     )
