@@ -273,6 +273,8 @@ def _closure(request: ExtractionRequest, items: list[Item], target: Item) -> lis
             for item in by_name.get(name, []):
                 if item.inner.type in spec.lexical and item.node.start_byte > user.node.start_byte:
                     continue  # out of the user's scope: a script's `my $start = <STDIN>` after the sub
+                if item.name in spec.initializers:
+                    continue  # never called by name: kept below for what it sets up
                 if id(item) not in chosen and (item.kind != "function" or item.name != request.function
                                                or item.accepts(request.param_count)):
                     chosen.add(id(item))
