@@ -2,8 +2,8 @@
 
 usage: python3 tide_interpolation.py N Q SEED MODE INPUT_PATH OUTPUT_PATH
 A semidiurnal-looking tide curve sampled at irregular moments. MODE anywhere: questions spread
-over the whole table; late: questions in the last tenth of the table, where a walk from the
-start is longest. Answers use binary search over the moments (O((n + q) log n)).
+over the whole table; late: questions in the last hundredth of the table, where a walk from
+the start is longest. Answers use binary search over the moments (O((n + q) log n)).
 """
 import math
 import random
@@ -32,7 +32,7 @@ def main():
         moment += rng.randint(1, 6000)
     h = [max(-5000, min(5000, int(4200 * math.sin(x / 745.0 * 2 * math.pi / 60) + rng.randint(-300, 300))))
          for x in t]
-    low = t[0] if mode == "anywhere" else t[n - n // 10]
+    low = t[0] if mode == "anywhere" else t[n - n // 100]
     questions = [rng.randint(low, t[-1]) for _ in range(q)]
     with open(input_path, "w") as f:
         f.write(f"{n}\n" + "".join(f"{a} {b}\n" for a, b in zip(t, h)) + f"{q}\n"
