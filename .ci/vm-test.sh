@@ -50,7 +50,7 @@ if [ "$#" -gt 0 ]; then
 fi
 log "booting $base with project disk $(basename "$disk") (TCG, ${ASSAY_VM_CPUS:-2} CPUs, $(( TIMEOUT - SECONDS )) s left)"
 console=$(mktemp "$CACHE/console-XXXXXX.log")
-trap 'mv -f "$console" "$CACHE/last-console.log"' EXIT  # kept for a look after the run
+trap 'chmod 644 "$console"; mv -f "$console" "$CACHE/last-console.log"' EXIT  # kept for a look after the run
 started=$(date +%s)
 left=$(( TIMEOUT - SECONDS ))  # what the image build and the project disk left of the budget
 [ "$left" -gt 60 ] || { log "no time left to boot the VM (ASSAY_VM_TIMEOUT=${TIMEOUT})"; exit 3; }
