@@ -367,7 +367,7 @@ def test_a_type_repeated_from_the_preamble_is_not_declared_twice():
 def _program(language, text, mode="whole", policy="syntax"):
     runtime = load_runtime(language)
     request = ExtractionRequest(mode, text, "", "", "", 0, runtime.program.stop_sequences, runtime.extraction,
-                                policy, keep_entry_points=True, kind="program")
+                                policy, kind="program")
     return extract(request)
 
 

@@ -45,7 +45,7 @@ def program_extraction(mode: str, runtime: Runtime, prompt: str, completion: str
     continuation keeps the prompt plus the text up to the runtime's program stop sequences."""
     request = ExtractionRequest(mode=mode, completion=completion, prompt=prompt, preamble="", function="",
                                 param_count=0, stops=runtime.program.stop_sequences, spec=runtime.extraction,
-                                policy=policy, keep_entry_points=True, kind="program")
+                                policy=policy, kind="program")
     return extract(request)
 
 

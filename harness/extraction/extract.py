@@ -41,7 +41,6 @@ class ExtractionRequest:
     stops: tuple[str, ...]
     spec: ExtractionSpec | None
     policy: str = "syntax"
-    keep_entry_points: bool = False
     kind: str = "function"  # function | program (a whole program: kept whole, main included)
 
 
@@ -261,7 +260,7 @@ def _closure(request: ExtractionRequest, items: list[Item], target: Item) -> lis
     by_name: dict[str, list[Item]] = {}
     for item in items:
         if item.kind in ("function", "definition") and item.name:
-            if item.name in spec.entry_points and not request.keep_entry_points:
+            if item.name in spec.entry_points:
                 continue
             by_name.setdefault(item.name, []).append(item)
     chosen = {id(target)}
