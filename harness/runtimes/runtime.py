@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import hashlib
 import json
+import secrets
 import shutil
 import subprocess
 from dataclasses import dataclass, field
@@ -44,15 +45,15 @@ class WarmCompile:
     """How a compile step may skip a cold compiler start (``compile.warm`` in runtime.yaml):
     ``server``, a long-lived compiler process started with ``command`` in a sandbox of its own,
     fed the cold ``compile.command`` and the source (``files``, a folder of the runtime, is bound
-    read-only where ``{files}`` stands in ``command``); or ``precompiled_header``, the file
-    ``header`` of the runtime precompiled once per toolchain with ``build`` and used by
-    ``command`` (``{header}`` stands for its path). ``harness/sandbox/warm_compilers.py`` runs
-    them; every verdict must equal the cold command's."""
+    read-only where ``{files}`` stands in ``command``); or ``prepared``, the runtime's ``file``
+    turned once per toolchain by ``build`` into files (a precompiled header, an index of the
+    precompiled standard library) that ``command`` reads (``{file}`` stands for its path).
+    ``harness/sandbox/warm_compilers.py`` runs them; every verdict must equal the cold command's."""
 
     kind: str
     command: tuple[str, ...]
     files: str | None = None
-    header: str | None = None
+    file: str | None = None
     build: tuple[str, ...] = ()
 
 
@@ -77,6 +78,16 @@ class ProgramSetup:
     stop_sequences: tuple[str, ...] = ()
 
 
+def _stand_in(length: int) -> str:
+    """A random stand-in for a nonce or a results file's name: hexadecimal digits, as many as
+    the real one's characters, which no template filter escapes or splits differently."""
+    return secrets.token_hex((length + 1) // 2)[:length]
+
+
+def _fill(text: str, stand_ins: tuple[str, str], results_file: str, nonce: str) -> str:
+    return text.replace(stand_ins[0], results_file).replace(stand_ins[1], nonce)
+
+
 @dataclass
 class Runtime:
     name: str
@@ -97,6 +108,9 @@ class Runtime:
     unsupported_types: dict[str, str] = field(default_factory=dict)
     extraction: ExtractionSpec | None = None
     program: ProgramSetup | None = None
+    # Per (problem id, name and nonce lengths): (problem, head, tail, checked, stand-ins) of its
+    # rendered program (render_program).
+    _frames: dict = field(default_factory=dict, init=False, repr=False, compare=False)
 
     @cached_property
     def templates(self) -> jinja2.Environment:
@@ -245,10 +259,61 @@ class Runtime:
         return head + preamble + code
 
     def render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
-        """The full source to run: the candidate's code followed by the generated test driver."""
+        """The full source to run: the candidate's code followed by the generated test driver.
+
+        Rendering the driver's cases is most of a candidate's rendering time (milliseconds, for
+        every candidate), and it depends only on the problem, the nonce and the results file's
+        name. So where program.j2 uses the code as it is (``{{ code }}``, once, and nowhere else),
+        a problem's program is rendered once with stand-ins of the same length and characters
+        for the three, and each candidate's is filled in. The first filled-in program of every
+        problem is checked against a full rendering; a runtime whose templates treat the nonce
+        or the name otherwise is rendered in full from then on."""
+        frame = self._frame(problem, len(results_file), len(nonce)) if self._code_is_verbatim else None
+        if frame is None:
+            return self._render_program(problem, code, results_file, nonce)
+        head, tail, stand_ins = frame
+        filled = _fill(head, stand_ins, results_file, nonce) + code + _fill(tail, stand_ins, results_file, nonce)
+        key = (problem.id, len(results_file), len(nonce))
+        if not self._frames[key][3]:
+            if filled != self._render_program(problem, code, results_file, nonce):
+                self._code_is_verbatim = False  # this runtime's templates are rendered in full
+                return self._render_program(problem, code, results_file, nonce)
+            self._frames[key] = self._frames[key][:3] + (True,) + self._frames[key][4:]
+        return filled
+
+    def _render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
         context = self.context(problem)
         context.update(code=code, cases=problem.cases, results_file=results_file, nonce=nonce)
         return self.templates.get_template("program.j2").render(context)
+
+    def _frame(self, problem: Problem, results_length: int, nonce_length: int):
+        """(text before the code, text after it, the stand-ins) of ``problem``'s program, or None."""
+        key = (problem.id, results_length, nonce_length)
+        found = self._frames.get(key)
+        if found is None or found[0] is not problem:
+            code, results_file, nonce = (f"assay-code-{secrets.token_hex(16)}", _stand_in(results_length),
+                                         _stand_in(nonce_length))
+            parts = self._render_program(problem, code, results_file, nonce).split(code)
+            if len(parts) != 2:
+                return None
+            found = self._frames[key] = (problem, parts[0], parts[1], False, (results_file, nonce))
+        return found[1], found[2], found[4]
+
+    @cached_property
+    def _code_is_verbatim(self) -> bool:
+        """Whether program.j2 names ``code`` once, as ``{{ code }}``, and includes no other
+        template (which would see it too)."""
+        try:
+            source = self.templates.loader.get_source(self.templates, "program.j2")[0]
+            tokens = [(kind, value) for _, kind, value in self.templates.lex(source)
+                      if kind not in ("whitespace", "data")]
+        except jinja2.TemplateError:
+            return False
+        uses = [i for i, token in enumerate(tokens) if token == ("name", "code")]
+        if any(token in (("name", "include"), ("name", "extends")) for token in tokens) or len(uses) != 1:
+            return False
+        i = uses[0]
+        return tokens[i - 1][0] == "variable_begin" and tokens[i + 1][0] == "variable_end"
 
     def step_limits(self, kind: str, problem: LimitOverrides = LimitOverrides(),
                     command_line: LimitOverrides = LimitOverrides(), program: bool = False) -> Limits | None:
@@ -418,16 +483,16 @@ def _str_list(value: object, allow_empty: bool = False) -> bool:
 
 
 def _warm_compile(raw: object, folder: Path, fail) -> WarmCompile | None:
-    """``compile.warm``: one of ``server: {command, files}`` or ``precompiled_header: {header,
-    build, command}`` (docs/runtime-format.md)."""
+    """``compile.warm``: one of ``server: {command, files}`` or ``prepared: {file, build,
+    command}`` (docs/runtime-format.md)."""
     if raw is None:
         return None
-    if not isinstance(raw, dict) or len(raw) != 1 or next(iter(raw)) not in ("server", "precompiled_header"):
-        raise fail("", "expected a mapping with one key, 'server' or 'precompiled_header'")
+    if not isinstance(raw, dict) or len(raw) != 1 or next(iter(raw)) not in ("server", "prepared"):
+        raise fail("", "expected a mapping with one key, 'server' or 'prepared'")
     kind, spec = next(iter(raw.items()))
     if not isinstance(spec, dict) or not _str_list(spec.get("command")):
         raise fail(f".{kind}.command", "expected a list of strings")
-    known = {"server": {"command", "files"}, "precompiled_header": {"command", "header", "build"}}[kind]
+    known = {"server": {"command", "files"}, "prepared": {"command", "file", "build"}}[kind]
     if set(spec) - known:
         raise fail(f".{kind}", f"unknown field(s) {', '.join(sorted(set(spec) - known))}")
     for name in known - {"command", "build"}:
@@ -436,9 +501,9 @@ def _warm_compile(raw: object, folder: Path, fail) -> WarmCompile | None:
             raise fail(f".{kind}.{name}", "expected a path inside the runtime folder")
         if not (folder / value).exists():
             raise fail(f".{kind}.{name}", f"{folder / value} does not exist")
-    if kind == "precompiled_header" and not _str_list(spec.get("build")):
+    if kind == "prepared" and not _str_list(spec.get("build")):
         raise fail(f".{kind}.build", "expected a list of strings")
-    return WarmCompile(kind, tuple(spec["command"]), spec.get("files"), spec.get("header"),
+    return WarmCompile(kind, tuple(spec["command"]), spec.get("files"), spec.get("file"),
                        tuple(spec.get("build") or ()))
 
 

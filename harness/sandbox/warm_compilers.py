@@ -12,9 +12,11 @@ declares none, or a backend without warm compilers, compiles cold as before. Two
   candidate's workspace, where the run step runs as before. One starts in the background when
   a candidate finds none idle (that candidate compiles cold), and compiles that candidate's
   files WARM_UP_COMPILES times before it serves, so its JIT is warm.
-* ``precompiled_header``: a header of the runtime compiled once per toolchain (its key is the
-  header's text, the build command and the compiler's identity) into a cache folder, which
-  the candidate's own compile step, still in the candidate's sandbox, reads read-only.
+* ``prepared``: a file of the runtime turned once per toolchain into files the compile command
+  reads (C++'s precompiled header; Go's index of its precompiled standard library, which lets
+  the compiler and linker run without the go command), kept in a cache folder keyed by the
+  file's text, the build command and the toolchain's identity. The candidate's own compile
+  step, still in the candidate's sandbox, reads that folder read-only.
 
 Verdicts must equal the cold path's (``tests/test_warm_compilers.py`` compares them), so a
 warm result is used only when it is the cold compiler's answer: a server that crashes, runs
@@ -78,13 +80,13 @@ class WarmSpec(Protocol):
     kind: str
     command: tuple[str, ...]
     files: str | None
-    header: str | None
+    file: str | None
     build: tuple[str, ...]
 
 
 class Compiler(Protocol):
     """How one runtime's compile step runs. ``needs`` is what the candidate's workspace must
-    offer (a precompiled header adds a read-only folder)."""
+    offer (prepared files add a read-only folder)."""
 
     needs: RuntimeSandboxNeeds
 
@@ -552,11 +554,11 @@ def _tail(data: bytes) -> str:
     return bytes(kept).decode("utf-8", errors="replace")
 
 
-# --- a precompiled header ---------------------------------------------------------------------
+# --- prepared files -----------------------------------------------------------------------------
 
-class HeaderCompiler:
-    """The cold compile command with a precompiled header, read-only in the candidate's
-    sandbox. The header is built once per toolchain, in a workspace of the same backend; a
+class PreparedCompiler:
+    """A compile command that reads files prepared once per toolchain (a precompiled header),
+    read-only in the candidate's sandbox. They are built in a workspace of the same backend; a
     build that fails leaves the runtime on its cold command."""
 
     def __init__(self, owner: "WarmCompilers", runtime, spec: WarmSpec):
@@ -566,18 +568,18 @@ class HeaderCompiler:
         self.spec = spec
         self.cold = ColdCompiler(runtime.needs, tuple(runtime.compile.command))
         self.needs = runtime.needs
-        name = Path(spec.header).name
-        self.header_name = name[:-3] + ".h" if name.endswith(".j2") else name
+        name = Path(spec.file).name
+        self.file_name = name[:-3] + ".h" if name.endswith(".j2") else name  # a template used as it is
         self.command: tuple[str, ...] | None = None
         self.lock = threading.Lock()
         self.tried = False
         self.why = "cold"
 
     def describe(self) -> str:
-        return f"precompiled header: {' '.join(self.command)}" if self.command else self.why
+        return f"prepared: {' '.join(self.command)}" if self.command else self.why
 
     def prepare(self, limits: Limits) -> None:
-        """Find or build the header for this toolchain; on any failure stay cold."""
+        """Find or build the prepared files for this toolchain; on any failure stay cold."""
         with self.lock:
             if self.tried:
                 return
@@ -585,21 +587,21 @@ class HeaderCompiler:
             try:
                 folder = self._build(limits)
             except Exception as exc:  # noqa: BLE001 - the cold command still works
-                self.why = f"cold (the precompiled header could not be built: {str(exc)[:300]})"
+                self.why = f"cold (the prepared files could not be built: {str(exc)[:300]})"
                 LOG.warning("assay: %s: %s", self.name, self.why)
                 return
-            header = str(folder / self.header_name)
-            self.command = tuple(part.replace("{header}", header) for part in self.spec.command)
+            path = str(folder / self.file_name)
+            self.command = tuple(part.replace("{file}", path) for part in self.spec.command)
             self.needs = replace(self.runtime.needs, ro_binds=tuple(self.runtime.needs.ro_binds) + (str(folder),))
 
     def _build(self, limits: Limits) -> Path:
-        text = (Path(self.runtime.path) / self.spec.header).read_bytes()
-        name = self.header_name
+        text = (Path(self.runtime.path) / self.spec.file).read_bytes()
+        name = self.file_name
         key = hashlib.sha256(b"\0".join([text, "\0".join(self.spec.build).encode(), self._toolchain_identity()]))
         folder = pch_cache_root() / f"{self.name}-{key.hexdigest()[:24]}"
         if (folder / ".complete").is_file():
             return folder
-        build = [part.replace("{header}", name) for part in self.spec.build]
+        build = [part.replace("{file}", name) for part in self.spec.build]
         outputs = [part for part in build if part.startswith(name) and part != name]
         sandbox = self.owner.sandbox()
         if sandbox is None:
@@ -633,14 +635,15 @@ class HeaderCompiler:
         return folder
 
     def _toolchain_identity(self) -> bytes:
-        """The compiler the build command names: its resolved path, size and change time, and
-        what it says its version is."""
-        program = shutil.which(self.spec.build[0], path=dict(self.runtime.needs.env).get("PATH", "/usr/bin:/bin"))
+        """The toolchain: the program of the runtime's version command (else the build
+        command's), its resolved path, size and change time, and what it says its version is."""
+        probe = list(self.runtime.version_command or [self.spec.build[0], "--version"])
+        program = shutil.which(probe[0], path=dict(self.runtime.needs.env).get("PATH", "/usr/bin:/bin"))
         if program is None:
-            raise RuntimeError(f"{self.spec.build[0]} is not installed")
+            raise RuntimeError(f"{probe[0]} is not installed")
         real = os.path.realpath(program)
         stat = os.stat(real)
-        version = subprocess.run([real, "--version"], capture_output=True, timeout=30).stdout
+        version = subprocess.run([real, *probe[1:]], capture_output=True, timeout=30).stdout
         return f"{real}\0{stat.st_size}\0{stat.st_mtime_ns}\0".encode() + version
 
     def compile(self, space, source_file: str, source: str, limits: Limits) -> StepResult:
@@ -650,7 +653,7 @@ class HeaderCompiler:
 
 
 def pch_cache_root() -> Path:
-    """Where precompiled headers are kept, one folder per runtime and toolchain key:
+    """Where prepared compile files are kept, one folder per runtime and toolchain key:
     ``ASSAY_PCH_CACHE``, else ``/var/tmp/assay-pch-<uid>``. Not under a home folder: the
     sandbox user (nobody, when Assay runs as root) must reach it. The folder must be this
     user's and writable by nobody else, or it is not used."""
@@ -670,7 +673,7 @@ LAUNCHERS: dict[str, Callable[[object], ServerLauncher]] = {
     "bubblewrap": LocalLauncher,
     "none": LocalLauncher,
 }
-HEADER_BACKENDS = ("bubblewrap", "none")
+PREPARED_BACKENDS = ("bubblewrap", "none")
 
 
 class WarmCompilers:
@@ -708,16 +711,16 @@ class WarmCompilers:
                 self._reaper = threading.Thread(target=self._expire_idle, name="assay-compilers-idle", daemon=True)
                 self._reaper.start()
             return ServerCompiler(self, runtime, spec)
-        if backend not in HEADER_BACKENDS:
+        if backend not in PREPARED_BACKENDS:
             return ColdCompiler(runtime.needs, tuple(runtime.compile.command),
-                                f"cold (no precompiled headers for the {backend} backend)")
-        return HeaderCompiler(self, runtime, spec)
+                                f"cold (no prepared compile files for the {backend} backend)")
+        return PreparedCompiler(self, runtime, spec)
 
     def prepare(self, runtime, limits: Limits, servers: int = 0, example: dict[str, bytes] | None = None) -> Compiler:
-        """The runtime's compiler, ready for a candidate (a precompiled header built first;
+        """The runtime's compiler, ready for a candidate (prepared files built first;
         ``servers`` compile servers started, warmed up on ``example``, and waited for)."""
         found = self.compiler(runtime)
-        if isinstance(found, HeaderCompiler):
+        if isinstance(found, PreparedCompiler):
             found.prepare(limits)
         elif isinstance(found, ServerCompiler) and servers:
             found.start_now(limits, servers, example)
