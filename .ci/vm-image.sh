@@ -2,7 +2,7 @@
 # The cgroup v2 test bed's base image, as root on a Debian/Ubuntu machine with apt: a Debian
 # kernel (linux-image-amd64, unpacked with dpkg-deb -x, never installed), a busybox initramfs
 # that loads the few modules a virtio disk with ext4 needs, and a small Debian root file system
-# built offline with debootstrap (bubblewrap, python3, g++ for one compiled runtime) packed into
+# built offline with debootstrap (bubblewrap, python3, gcc for the native hostile program) packed into
 # an ext4 image with mkfs.ext4 -d (no loop device needed). The project itself is not in it:
 # .ci/vm-test.sh packs the project on a second disk at each run, so the base is rebuilt only when
 # this script changes.
@@ -102,7 +102,7 @@ cp kernel-tree/boot/vmlinuz-* kernel
 mirror=$(cd "$here/.." && python3 -c "from harness.sandbox.images import debian_mirror; print(debian_mirror())" \
          2>/dev/null || echo http://deb.debian.org/debian)
 log "debootstrap bookworm from $mirror"
-debootstrap --variant=minbase --include=bubblewrap,python3,procps,iproute2,g++,libc6-dev \
+debootstrap --variant=minbase --include=bubblewrap,python3,procps,iproute2,gcc,libc6-dev \
   bookworm root "$mirror" > debootstrap.log 2>&1 || { tail -n 20 debootstrap.log >&2; exit 1; }
 rm -rf root/var/cache/apt/archives/*.deb root/var/lib/apt/lists/* root/usr/share/doc/* \
        root/usr/share/locale/* root/usr/share/man/*
