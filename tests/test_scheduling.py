@@ -1,6 +1,6 @@
 """The scheduler interleaves languages within a bounded window and loses nothing."""
 
-from harness.engine.scheduling import interleave
+from harness.engine.scheduling import CostModel, interleave
 
 
 def test_grouped_input_is_interleaved_compiled_groups_first():
@@ -28,3 +28,23 @@ def test_the_window_bounds_how_far_ahead_input_is_read():
     stream = interleave(source(), group_of=lambda x: x[0], priority_of=lambda g: 0, window=10)
     next(stream)
     assert len(consumed) <= 11
+
+
+def test_a_group_measured_costlier_goes_first_whatever_its_prior():
+    # With warm compilers a compiled language can cost less than an interpreted one: what the
+    # run measured decides, the prior only until then.
+    costs = CostModel(lambda group: 1.0 if group == "java" else 0.1)
+    items = [(g, i) for i in range(4) for g in ("java", "python")]
+    assert [g for g, _ in interleave(items, group_of=lambda x: x[0], priority_of=costs)][:2] == ["java", "python"]
+    for seconds in (0.05, 0.04, 0.06):
+        costs.observe("java", seconds)
+    costs.observe("python", 0.3)
+    assert [g for g, _ in interleave(items, group_of=lambda x: x[0], priority_of=costs)][:2] == ["python", "java"]
+
+
+def test_the_cost_estimate_is_an_exponential_moving_average():
+    costs = CostModel(lambda group: 5.0, weight=0.5)
+    assert costs("g") == 5.0
+    costs.observe("g", 2.0)
+    costs.observe("g", 4.0)
+    assert costs("g") == 3.0  # 2 + 0.5 * (4 - 2)

@@ -23,7 +23,7 @@ from ..metrics import summarize
 from ..problems import ProblemSet
 from ..console import Progress
 from ..runtimes import Runtime
-from .scheduling import interleave
+from .scheduling import CostModel, interleave
 from ..sandbox import Sandbox
 from ..store import MANIFEST, SUMMARY, ResultStore, StoreMismatch, read_rows
 from .cache import VerdictCache
@@ -122,6 +122,10 @@ def program_facts(options: ScoreOptions, problems: ProblemSet, runtimes: dict[st
     return {"programs": dict(options.programs.describe(options.mode), problems=len(ids), time_limits=sources)}
 
 
+# What a candidate is taken to cost, in seconds, until the first ones of its language finish
+# (harness/engine/scheduling.py's CostModel): a cold compile is about a second, an interpreted
+# candidate tens of milliseconds.
+PRIOR_SECONDS = {"compiled": 1.0, "interpreted": 0.1}
 IDENTITY_FIELDS = ("inputs", "problem_set", "mode", "extraction", "limit_overrides", "repeat", "programs")
 
 
@@ -221,17 +225,17 @@ def score(options: ScoreOptions, problems: ProblemSet, runtimes: dict[str, Runti
                     yield key, item
 
             def finish(key: str, sample, verdict: Verdict) -> None:
+                costs.observe(sample.language, verdict.seconds)
                 cache.put(key, verdict)
                 record(sample.key, verdict, shared=False, extraction=executor.extraction(sample).record)
                 for other, how in waiting.pop(key, []):
                     record(other, verdict, shared=True, extraction=how)
 
-            def priority(language: str) -> int:
-                return 1 if runtimes[language].compile is not None else 0
-
+            # Until a language's first candidates finish, a compiled one is taken to cost more.
+            costs = CostModel(lambda language: 0.0 if language is None else
+                              PRIOR_SECONDS["compiled" if runtimes[language].compile is not None else "interpreted"])
             scheduled = (job for job in interleave(jobs(), group_of=lambda job: job and job[1].language,
-                                                   priority_of=lambda language: language is not None
-                                                   and priority(language)) if job is not None)
+                                                   priority_of=costs) if job is not None)
             try:
                 for key, sample, verdict in engine.run(scheduled):
                     finish(key, sample, verdict)
