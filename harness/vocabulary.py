@@ -158,6 +158,19 @@ class StepResult:
 
 
 @dataclass(frozen=True)
+class WarmFiles:
+    """What a runtime's warm compiler (runtime.yaml's ``compile.warm``) needs built into a
+    Docker image, as plain data for the sandbox layer: for ``server``, ``path`` is the folder of
+    the runtime with the compile server's own files (empty: none); for ``prepared``, ``path`` is the file of
+    the runtime that ``build`` turns (``{file}`` standing for it) into the files the compile
+    command reads. Paths are relative to the runtime folder."""
+
+    kind: str
+    path: str
+    build: tuple[str, ...] = ()
+
+
+@dataclass(frozen=True)
 class RuntimeSandboxNeeds:
     """What a runtime asks of a sandbox: read-only paths to expose and its environment; for
     Docker, an image named in runtime.yaml, else the runtime's folder (its image is built from
@@ -169,6 +182,7 @@ class RuntimeSandboxNeeds:
     image: str | None = None
     folder: str | None = None
     digest: str | None = None  # the runtime folder's content hash: it names the Docker image
+    warm_files: WarmFiles | None = None  # built into the Docker image (compile.warm)
 
 
 @dataclass

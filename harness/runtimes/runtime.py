@@ -23,7 +23,7 @@ from ..extraction import ExtractionSpec, ExtractionSpecError, parse_extraction_s
 from ..locations import runtime_search_path
 from ..problems import Problem
 from ..problems.types import GENERICS, SCALARS
-from ..vocabulary import STEP_DEFAULTS, LimitOverrides, Limits, RuntimeSandboxNeeds
+from ..vocabulary import STEP_DEFAULTS, LimitOverrides, Limits, RuntimeSandboxNeeds, WarmFiles
 from ..yamlfiles import read_yaml
 from .filters import (NAMING_STYLES, chunked, float_class, float_literal, indent_lines, recase,
                       utf16_units)
@@ -464,6 +464,7 @@ def parse_runtime(data: object, path: Path, file: Path) -> Runtime:
             image=sandbox.get("image"),
             folder=str(path),
             digest=folder_digest(path),
+            warm_files=_warm_files(step("compile")),
         ),
         version_command=tuple(version) if _str_list(version, allow_empty=True) else (),
         limits=limits,
@@ -505,6 +506,14 @@ def _warm_compile(raw: object, folder: Path, fail) -> WarmCompile | None:
         raise fail(f".{kind}.build", "expected a list of strings")
     return WarmCompile(kind, tuple(spec["command"]), spec.get("files"), spec.get("file"),
                        tuple(spec.get("build") or ()))
+
+
+def _warm_files(compile_step: Step | None) -> WarmFiles | None:
+    """What of ``compile.warm`` a Docker image carries (harness/sandbox/images.py builds it in)."""
+    warm = compile_step.warm if compile_step is not None else None
+    if warm is None:
+        return None
+    return WarmFiles(warm.kind, (warm.files if warm.kind == "server" else warm.file) or "", warm.build)
 
 
 def _program_setup(raw: object, source_file: str, compile_step: Step | None, run: Step, fail) -> ProgramSetup:

@@ -68,6 +68,7 @@ LABEL_OWNER_START = "assay.owner-start"
 LABEL_HOST = "assay.host"
 LABEL_RUN = "assay.run"
 LABEL_RUNTIME = "assay.runtime"
+LABEL_ROLE = "assay.role"  # "compile-server" on a warm compiler's container; none on a candidate's
 MAX_RUNS_ENV = "ASSAY_DOCKER_MAX_RUNS"
 DEFAULT_MAX_RUNS = 50
 # The supervisor (a Python process: ~8 MB charged when idle) lives in the same memory cgroup as the
@@ -197,7 +198,11 @@ class DockerWorkspace:
         return self.box.id
 
     def write(self, name: str, content: str) -> None:
-        request = {"op": "write", "name": name, "data": base64.b64encode(content.encode("utf-8")).decode("ascii")}
+        self.write_bytes(name, content.encode("utf-8"))
+
+    def write_bytes(self, name: str, data: bytes) -> None:
+        """A new file in /work (a compiled file a warm compiler made, say)."""
+        request = {"op": "write", "name": name, "data": base64.b64encode(data).decode("ascii")}
         self.journal.append((request, None))
         self._perform(request, CALL_SECONDS, None, deferred=True)
 
@@ -401,7 +406,7 @@ class DockerSandbox(ClosingSandbox):
         self.pool_for(needs).warm(count)
 
     def _make_pool(self, needs: RuntimeSandboxNeeds) -> WarmPool:
-        from .images import find_image, image_tag
+        from .images import find_image, image_tag, image_warm_files, inspect_image
 
         if not needs.image and not needs.digest:
             raise SandboxUnavailable(f"docker sandbox: the {needs.name} runtime names no image and no folder to build one")
@@ -412,14 +417,27 @@ class DockerSandbox(ClosingSandbox):
                 f"docker sandbox: no image {tag} for the {needs.name} runtime (built from its current files); "
                 f"build it with: assay runtimes build {needs.name} (add --offline-base without a registry)"
             )
-        self.images[needs.name] = {"tag": tag, "id": image_id}
+        facts = self.retry(lambda: inspect_image(self.client, tag), "look up an image") or {}
+        self.images[needs.name] = {"tag": tag, "id": image_id, "warm_files": image_warm_files(facts)}
         return WarmPool(self, lambda: self.start_box(image_id, needs.name))
 
+    def warm_files(self, needs: RuntimeSandboxNeeds) -> tuple[str, str | None]:
+        """(the runtime's image id, where it keeps its warm compiler files): None when it was
+        built without them, ``""`` when their build failed (images.py, ``assay.warm-files``).
+        SandboxUnavailable when the runtime has no image."""
+        self.check()
+        self.pool_for(needs)
+        found = self.images[needs.name]
+        return found["id"], found.get("warm_files")
+
     # -- containers --
-    def start_box(self, image: str, runtime: str) -> Box:
-        limits = Limits()
-        memory = (limits.memory_mb + SUPERVISOR_MB) * 2**20
-        pids = limits.max_processes + 1
+    def _create(self, image: str, command: list[str], labels: dict[str, str], memory: int, pids: int,
+                environment: dict[str, str] | None = None, **extra) -> str:
+        """A locked-down container (not started): network none, read-only root, tmpfs /work and
+        /tmp, no capabilities, no-new-privileges, uid 10001, memory (swap equal), pids and one
+        CPU. Its stdin stays open for the harness to attach: with detach=False Docker also sets
+        StdinOnce, so its pid 1's stdin closes when our attachment drops and a crashed harness
+        stops it."""
         api = self.client.api
         host_config = api.create_host_config(
             network_mode="none",
@@ -433,19 +451,52 @@ class DockerSandbox(ClosingSandbox):
             nano_cpus=CPUS * 10**9,
             log_config={"Type": "none", "Config": {}},
             init=False,
+            **extra,
         )
-        created = api.create_container(
-            image,
-            command=["python3", "-I", "-S", "-c", AGENT_SOURCE],
-            user=RUNNER,
-            working_dir=WORK_DIR,
-            labels={**self.labels, LABEL_RUNTIME: runtime},
-            host_config=host_config,
-            stdin_open=True,  # with detach=False this also sets StdinOnce: the supervisor's stdin
-            detach=False,     # closes when our attachment drops, so a crashed harness stops it
-            hostname="sandbox",
-        )
-        container = created["Id"]
+        return api.create_container(image, command=command, user=RUNNER, working_dir=WORK_DIR,
+                                    labels={**self.labels, **labels}, host_config=host_config,
+                                    environment=environment, stdin_open=True, detach=False,
+                                    hostname="sandbox")["Id"]
+
+    def start_compile_server(self, image: str, runtime: str, command: list[str], env: dict[str, str],
+                             limits: Limits):
+        """A container of its own for a warm compiler (harness/sandbox/docker_compilers.py):
+        ``command`` as its pid 1, at the compile step's memory, pids and file size limits, with
+        no core files. Returns (container id, the attached stream); the caller removes it."""
+        import docker
+
+        self.check()
+        memory = limits.memory_mb * 2**20
+        file_bytes = limits.max_file_mb * 2**20
+        ulimits = [docker.types.Ulimit(name="fsize", soft=file_bytes, hard=file_bytes),
+                   docker.types.Ulimit(name="core", soft=0, hard=0)]
+        api = self.client.api
+        container = self._create(image, command, {LABEL_RUNTIME: runtime, LABEL_ROLE: "compile-server"},
+                                 memory, limits.max_processes, {**ENV_BASE, **env}, ulimits=ulimits)
+        try:
+            stream = api.attach_socket(container, params={"stdin": 1, "stdout": 1, "stderr": 1, "stream": 1})
+            api.start(container)
+        except BaseException:
+            with contextlib.suppress(Exception):
+                api.remove_container(container, force=True)
+            raise
+        if self.closed:
+            self.remove_container(container)
+            raise DaemonTrouble("the sandbox was closed")
+        return container, stream
+
+    def remove_container(self, container: str) -> None:
+        """Remove a container now (retrying daemon trouble); gone already is fine."""
+        self.retry(lambda: self.client.api.remove_container(container, force=True), "remove a container",
+                   not_found_ok=True)
+
+    def start_box(self, image: str, runtime: str) -> Box:
+        limits = Limits()
+        memory = (limits.memory_mb + SUPERVISOR_MB) * 2**20
+        pids = limits.max_processes + 1
+        api = self.client.api
+        container = self._create(image, ["python3", "-I", "-S", "-c", AGENT_SOURCE], {LABEL_RUNTIME: runtime},
+                                 memory, pids)
         try:
             stream = api.attach_socket(container, params={"stdin": 1, "stdout": 1, "stderr": 1, "stream": 1})
             channel = DockerChannel(stream)

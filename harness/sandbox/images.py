@@ -5,24 +5,30 @@ a stale one can never be used by mistake.
 Each runtime's ``Dockerfile`` (``ARG BASE`` / ``FROM ${BASE}``) installs its toolchain. On top
 of it the engine adds one small layer of its own (``SUPERVISOR_LAYER``): it makes sure the
 image has the ``python3`` the in-container step supervisor runs on and the ``runner`` user
-(uid 10001) every step runs as. Bases: ``debian:bookworm-slim`` from a registry, or, with no
+(uid 10001) every step runs as. A runtime with a warm compiler (``compile.warm``) gets its
+files there too, read-only under ``/opt/assay`` (``warm_layer``): a compile server's own files,
+or a prepared file turned by its build command during the image build, so once per image and
+toolchain. The image's ``assay.warm-files`` label says where they are (empty: the prepared
+build failed, and the runtime compiles cold); an image without the label predates them. Bases: ``debian:bookworm-slim`` from a registry, or, with no
 registry in reach, a local Debian made by debootstrap and imported as ``assay-base:bookworm``.
 """
 
 from __future__ import annotations
 
 import io
+import json
 import os
 import re
 import shutil
 import subprocess
+import tarfile
 import tempfile
 import time
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Callable
 
-from ..vocabulary import RuntimeSandboxNeeds
+from ..vocabulary import RuntimeSandboxNeeds, WarmFiles
 
 DEFAULT_BASE = "debian:bookworm-slim"
 OFFLINE_BASE = "assay-base:bookworm"
@@ -35,6 +41,12 @@ RUNNER_UID = 10001
 TAG_HEX = 12
 LABEL_RUNTIME = "assay.runtime"
 LABEL_DIGEST = "assay.runtime-digest"
+LABEL_WARM = "assay.warm-files"
+WARM_ROOT = "/opt/assay"
+SERVER_FILES = f"{WARM_ROOT}/warm"  # a compile server's files, where {files} points in a container
+PREPARED_FILES = f"{WARM_ROOT}/prepared"  # a prepared file and what its build made
+# The environment of a prepared build in the image, under the runtime's own on top.
+BUILD_ENV = {"HOME": "/tmp", "TMPDIR": "/tmp", "LANG": "C.UTF-8", "PATH": "/usr/local/bin:/usr/bin:/bin"}
 
 # Added on top of every runtime's own image. Only installs python3 when the toolchain image
 # lacks the modules the supervisor imports (harness/sandbox/step_supervisor.py).
@@ -54,6 +66,62 @@ USER {RUNNER_UID}:{RUNNER_UID}
 """
 
 Log = Callable[[str], None]
+
+
+def prepared_file_name(path: str) -> str:
+    """The name a prepared file is used under: a ``.j2`` template is used as it is, as ``.h``."""
+    name = Path(path).name
+    return name[:-3] + ".h" if name.endswith(".j2") else name
+
+
+def warm_location(warm: WarmFiles) -> str:
+    """Where a container sees the warm compiler's files: the server's folder, or the prepared
+    file (``{file}`` in the compile command)."""
+    return SERVER_FILES if warm.kind == "server" else f"{PREPARED_FILES}/{prepared_file_name(warm.path)}"
+
+
+def warm_layer(needs: RuntimeSandboxNeeds) -> tuple[str, dict[str, tuple[bytes, int]]]:
+    """The Dockerfile lines that put a runtime's warm compiler files into its image, and the
+    build context files they copy (name -> (bytes, mode)). Empty for a runtime without one."""
+    warm = needs.warm_files
+    if warm is None:
+        return "", {}
+    folder = Path(needs.folder)
+    files: dict[str, tuple[bytes, int]] = {}
+    lines = ["USER root"]
+    if warm.kind == "server":
+        if warm.path:
+            for path in sorted(p for p in (folder / warm.path).rglob("*") if p.is_file()):
+                mode = 0o755 if os.access(path, os.X_OK) else 0o644
+                files["warm/" + str(path.relative_to(folder / warm.path))] = (path.read_bytes(), mode)
+            lines.append(f"COPY warm/ {SERVER_FILES}/")
+        else:
+            lines.append(f"RUN mkdir -p {SERVER_FILES}")
+        folder_in_image = SERVER_FILES
+    else:
+        name = prepared_file_name(warm.path)
+        files[f"prepared/{name}"] = ((folder / warm.path).read_bytes(), 0o644)
+        env = {**BUILD_ENV, **dict(needs.env)}
+        build = ["env", "-i", *(f"{k}={v}" for k, v in env.items()),
+                 *(part.replace("{file}", name) for part in warm.build)]
+        lines += [f"COPY prepared/ {PREPARED_FILES}/", f"WORKDIR {PREPARED_FILES}", "RUN " + json.dumps(build),
+                  "WORKDIR /work"]
+        folder_in_image = PREPARED_FILES
+    lines += [f"RUN chown -R 0:0 {folder_in_image} && chmod -R a+rX,go-w {folder_in_image}",
+              f"USER {RUNNER_UID}:{RUNNER_UID}"]
+    return "\n".join(lines) + "\n", files
+
+
+def _context(dockerfile: str, files: dict[str, tuple[bytes, int]]) -> io.BytesIO:
+    """A build context as a tar: the Dockerfile and ``files``, owned by root."""
+    buffer = io.BytesIO()
+    with tarfile.open(fileobj=buffer, mode="w") as tar:
+        for name, (data, mode) in {"Dockerfile": (dockerfile.encode(), 0o644), **files}.items():
+            info = tarfile.TarInfo(name)
+            info.size, info.mode, info.mtime = len(data), mode, 0
+            tar.addfile(info, io.BytesIO(data))
+    buffer.seek(0)
+    return buffer
 
 
 class ImageError(RuntimeError):
@@ -175,12 +243,24 @@ def debian_mirror(sources: tuple[Path, ...] = APT_SOURCES) -> str:
 
 def find_image(client, ref: str) -> str | None:
     """The image id for a tag, or None when there is no such image."""
+    found = inspect_image(client, ref)
+    return None if found is None else found["Id"]
+
+
+def inspect_image(client, ref: str) -> dict | None:
+    """What the daemon knows of an image (its id, its labels under Config), or None."""
     import docker
 
     try:
-        return client.api.inspect_image(ref)["Id"]
+        return client.api.inspect_image(ref)
     except docker.errors.ImageNotFound:
         return None
+
+
+def image_warm_files(facts: dict) -> str | None:
+    """Where an inspected image keeps its warm compiler files: a path, ``""`` when their build
+    failed, None when the image was built without them."""
+    return ((facts.get("Config") or {}).get("Labels") or {}).get(LABEL_WARM)
 
 
 def ensure_base(client, base: str | None, offline: bool, log: Log) -> str:
@@ -268,22 +348,48 @@ def build_runtime_image(client, runtime: RuntimeSandboxNeeds, base: str, log: Lo
     """Build the image of the runtime with these ``needs`` on ``base`` (skipped when its tag already exists)."""
     tag = image_tag(runtime)
     started = time.monotonic()
-    existing = find_image(client, tag)
-    if existing and not rebuild:
-        return BuiltImage(runtime.name, tag, existing, False, 0.0)
-    problems = dockerfile_problems(dockerfile_path(runtime))
-    if problems:
-        raise ImageError("\n".join(problems))
-    labels = {LABEL_RUNTIME: runtime.name, LABEL_DIGEST: runtime.digest}
+    existing = inspect_image(client, tag)
     toolchain = f"{tag}-toolchain"
-    _stream_build(client, log, runtime.name, path=str(runtime.folder), tag=toolchain,
-                  buildargs={"BASE": base}, labels=labels)
-    _stream_build(client, log, runtime.name, fileobj=io.BytesIO(SUPERVISOR_LAYER.encode()), tag=tag,
-                  buildargs={"TOOLCHAIN": toolchain}, labels=labels)
+    if existing and not rebuild:
+        if runtime.warm_files is None or image_warm_files(existing) is not None:
+            return BuiltImage(runtime.name, tag, existing["Id"], False, 0.0)
+        # Built before images carried warm compiler files: only the engine's layer is redone.
+        if find_image(client, toolchain) is None:
+            raise ImageError(f"{runtime.name}: {tag} lacks its warm compiler's files and its toolchain image "
+                             f"{toolchain} is gone; rebuild it: assay runtimes build {runtime.name} --rebuild")
+        log(f"{runtime.name}: adding the warm compiler's files to {tag}")
+    else:
+        problems = dockerfile_problems(dockerfile_path(runtime))
+        if problems:
+            raise ImageError("\n".join(problems))
+        _stream_build(client, log, runtime.name, path=str(runtime.folder), tag=toolchain,
+                      buildargs={"BASE": base}, labels={LABEL_RUNTIME: runtime.name, LABEL_DIGEST: runtime.digest})
+    _build_engine_layer(client, runtime, toolchain, tag, log)
     image_id = find_image(client, tag)
     if image_id is None:
         raise ImageError(f"{runtime.name}: the build finished but {tag} is missing")
     return BuiltImage(runtime.name, tag, image_id, True, round(time.monotonic() - started, 1))
+
+
+def _build_engine_layer(client, runtime: RuntimeSandboxNeeds, toolchain: str, tag: str, log: Log) -> None:
+    """The supervisor layer on the toolchain image, with the warm compiler's files. A prepared
+    build that fails there leaves the image without them (labelled so): the runtime then
+    compiles cold under Docker, as it does elsewhere when its prepared build fails."""
+    labels = {LABEL_RUNTIME: runtime.name, LABEL_DIGEST: runtime.digest}
+    warm, files = warm_layer(runtime)
+    if runtime.warm_files is not None:
+        try:
+            _stream_build(client, log, runtime.name, fileobj=_context(SUPERVISOR_LAYER + warm, files),
+                          custom_context=True, tag=tag, buildargs={"TOOLCHAIN": toolchain},
+                          labels={**labels, LABEL_WARM: warm_location(runtime.warm_files)})
+            return
+        except ImageError as exc:
+            if runtime.warm_files.kind != "prepared":
+                raise
+            log(f"{runtime.name}: the prepared compile files did not build, so this image compiles cold: {exc}")
+        labels[LABEL_WARM] = ""
+    _stream_build(client, log, runtime.name, fileobj=io.BytesIO(SUPERVISOR_LAYER.encode()), tag=tag,
+                  buildargs={"TOOLCHAIN": toolchain}, labels=labels)
 
 
 def _stream_build(client, log: Log, name: str, **kwargs) -> None:

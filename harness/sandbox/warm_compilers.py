@@ -46,7 +46,9 @@ from typing import Callable, Protocol
 
 from . import seccomp
 from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
+from .base import SandboxError
 from .cgroups import Cgroup
+from .images import prepared_file_name
 from .local import LOG, LocalWorkspace, candidate_env, default_work_root, private_folder, remove_folder
 from .process import join_and_drop
 from .step_supervisor import keep_tail, write_new_file
@@ -185,6 +187,10 @@ class Server:
     uses: int = 0
     last_used: float = field(default_factory=time.monotonic)
 
+    def send(self, data: bytes) -> None:
+        self.process.stdin.write(data)
+        self.process.stdin.flush()
+
     def cpu_seconds(self) -> float:
         """CPU time of every process of the server so far (its cgroup's, else its own tree's)."""
         pids: set[int] = set()
@@ -192,7 +198,7 @@ class Server:
             for procs in self.cgroup.procs_files:
                 with contextlib.suppress(OSError, ValueError):
                     pids |= {int(p) for p in Path(procs).read_text().split()}
-        if not pids:
+        if not pids and self.process is not None:
             pids = {self.process.pid} | set(_descendants(self.process.pid))
         ticks = os.sysconf("SC_CLK_TCK")
         total = 0
@@ -350,6 +356,7 @@ class ServerCompiler:
         self.name = runtime.name
         self.needs = runtime.needs
         self.cold = ColdCompiler(runtime.needs, tuple(runtime.compile.command))
+        # Under Docker the image carries them (docker_compilers.py); the launcher says where.
         self.files = (Path(runtime.path) / spec.files).resolve() if spec.files else None
         self.command = tuple(spec.command)
         self.limits: Limits | None = None
@@ -361,7 +368,8 @@ class ServerCompiler:
         self.warm_compiles = 0
 
     def describe(self) -> str:
-        return f"warm compile server: {' '.join(self.command)}"
+        where = " (a container per server)" if self.owner.backend == "docker" else ""
+        return f"warm compile server{where}: {' '.join(self.command)}"
 
     # -- the pool --
     def _take(self, limits: Limits, example: dict[str, bytes]) -> Server | None:
@@ -413,8 +421,7 @@ class ServerCompiler:
     def _wait_ready(self, server: Server) -> None:
         """A first compile of nothing: the server answers once it is up (a JVM that compiled
         the server's own source, Node with the compiler loaded)."""
-        server.process.stdin.write(frame("hello"))
-        server.process.stdin.flush()
+        server.send(frame("hello"))
         try:
             answer = server.reader.field(time.monotonic() + START_SECONDS)
         except TimeoutError:
@@ -429,8 +436,7 @@ class ServerCompiler:
         (HotSpot's, V8's, Mono's) makes the compiler fast only after it has run a while, and
         that cost is better paid in the background than by the first candidates."""
         for _ in range(WARM_UP_COMPILES):
-            server.process.stdin.write(compile_request(list(self.cold.command), files))
-            server.process.stdin.flush()
+            server.send(compile_request(list(self.cold.command), files))
             try:
                 status = self._reply(server, time.monotonic() + min(limits.wall_seconds, WARM_UP_SECONDS))[0]
             except TimeoutError:
@@ -474,7 +480,7 @@ class ServerCompiler:
     # -- one compile --
     def compile(self, space, source_file: str, source: str, limits: Limits) -> StepResult:
         server = self._take(limits, {source_file: source.encode("utf-8")})
-        if server is None or not isinstance(space, LocalWorkspace):
+        if server is None or not isinstance(space, LocalWorkspace) and not hasattr(space, "write_bytes"):
             if server is not None:
                 self._give_back(server)
             return self.cold.compile(space, source_file, source, limits)
@@ -482,9 +488,7 @@ class ServerCompiler:
         cpu_before = server.cpu_seconds()
         oom_before = server.cgroup.oom_kills() if server.cgroup is not None else 0
         try:
-            server.process.stdin.write(compile_request(list(self.cold.command),
-                                                       {source_file: source.encode("utf-8")}))
-            server.process.stdin.flush()
+            server.send(compile_request(list(self.cold.command), {source_file: source.encode("utf-8")}))
             status, stdout, stderr, made = self._reply(server, started + limits.wall_seconds,
                                                        self._cpu_watch(server, cpu_before, limits))
         except (TimeoutError, CpuExceeded):
@@ -516,7 +520,10 @@ class ServerCompiler:
             result.file_size_exceeded = True
             return result
         for name, data in made.items():
-            write_new_file(str(space.path), name, data, owner=space.owner)
+            if isinstance(space, LocalWorkspace):
+                write_new_file(str(space.path), name, data, owner=space.owner)
+            else:  # a container's /work (docker.py): the same checks, by its supervisor
+                space.write_bytes(name, data)
         with self.lock:
             self.warm_compiles += 1
             self.troubles = 0
@@ -559,24 +566,29 @@ def _tail(data: bytes) -> str:
 class PreparedCompiler:
     """A compile command that reads files prepared once per toolchain (a precompiled header),
     read-only in the candidate's sandbox. They are built in a workspace of the same backend; a
-    build that fails leaves the runtime on its cold command."""
+    build that fails leaves the runtime on its cold command. Under Docker they were built into
+    the runtime's image (``in_image``: the prepared file's path there), and nothing is mounted."""
 
-    def __init__(self, owner: "WarmCompilers", runtime, spec: WarmSpec):
+    def __init__(self, owner: "WarmCompilers", runtime, spec: WarmSpec, in_image: str | None = None):
         self.owner = owner
         self.name = runtime.name
         self.runtime = runtime
         self.spec = spec
         self.cold = ColdCompiler(runtime.needs, tuple(runtime.compile.command))
         self.needs = runtime.needs
-        name = Path(spec.file).name
-        self.file_name = name[:-3] + ".h" if name.endswith(".j2") else name  # a template used as it is
+        self.file_name = prepared_file_name(spec.file)  # a template is used as it is
         self.command: tuple[str, ...] | None = None
         self.lock = threading.Lock()
         self.tried = False
         self.why = "cold"
+        if in_image is not None:
+            self.tried = True
+            self.command = tuple(part.replace("{file}", in_image) for part in spec.command)
 
     def describe(self) -> str:
-        return f"prepared: {' '.join(self.command)}" if self.command else self.why
+        if self.command is None:
+            return self.why
+        return f"prepared{' in the image' if self.owner.backend == 'docker' else ''}: {' '.join(self.command)}"
 
     def prepare(self, limits: Limits) -> None:
         """Find or build the prepared files for this toolchain; on any failure stay cold."""
@@ -669,11 +681,19 @@ def pch_cache_root() -> Path:
 
 # --- the compilers of one sandbox -------------------------------------------------------------
 
+def _docker_launcher(sandbox) -> ServerLauncher:
+    from .docker_compilers import DockerLauncher  # imports this module
+
+    return DockerLauncher(sandbox)
+
+
 LAUNCHERS: dict[str, Callable[[object], ServerLauncher]] = {
     "bubblewrap": LocalLauncher,
     "none": LocalLauncher,
+    "docker": _docker_launcher,
 }
-PREPARED_BACKENDS = ("bubblewrap", "none")
+PREPARED_BACKENDS = ("bubblewrap", "none", "docker")
+IN_IMAGE_BACKENDS = ("docker",)  # warm compiler files built into the runtime's image
 
 
 class WarmCompilers:
@@ -702,6 +722,11 @@ class WarmCompilers:
         backend = self.backend
         if spec is None:
             return ColdCompiler(runtime.needs, tuple(runtime.compile.command))
+        in_image = None
+        if backend in IN_IMAGE_BACKENDS:
+            in_image, why = self._in_image(runtime)
+            if in_image is None:
+                return ColdCompiler(runtime.needs, tuple(runtime.compile.command), why)
         if spec.kind == "server":
             if backend not in LAUNCHERS:
                 return ColdCompiler(runtime.needs, tuple(runtime.compile.command),
@@ -714,7 +739,23 @@ class WarmCompilers:
         if backend not in PREPARED_BACKENDS:
             return ColdCompiler(runtime.needs, tuple(runtime.compile.command),
                                 f"cold (no prepared compile files for the {backend} backend)")
-        return PreparedCompiler(self, runtime, spec)
+        return PreparedCompiler(self, runtime, spec, in_image)
+
+    def _in_image(self, runtime) -> tuple[str | None, str]:
+        """Where the runtime's image keeps its warm compiler files, or None and why not."""
+        sandbox = self.sandbox()
+        try:
+            if sandbox is None:
+                raise SandboxError("the sandbox was closed")
+            _, where = sandbox.warm_files(runtime.needs)
+        except SandboxError as exc:
+            return None, f"cold ({str(exc)[:300]})"
+        if where is None:
+            return None, (f"cold (the {runtime.name} image was built before images carried warm compiler files; "
+                          f"add them with: assay runtimes build {runtime.name})")
+        if not where:
+            return None, f"cold (the {runtime.name} image's prepared compile files failed to build with it)"
+        return where, ""
 
     def prepare(self, runtime, limits: Limits, servers: int = 0, example: dict[str, bytes] | None = None) -> Compiler:
         """The runtime's compiler, ready for a candidate (prepared files built first;
