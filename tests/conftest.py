@@ -20,6 +20,7 @@ SLOW_MODULES = {
     "test_adversarial", "test_docker_sandbox", "test_ray_engine", "test_runtimes", "test_demo",
     "test_sandbox_isolation", "test_sandbox_cleanup", "test_sandbox_planted_links", "test_seccomp_filter",
     "test_sandbox_none_host_mode", "test_sandbox_soak", "test_runtime_folders", "test_extraction_corpus",
+    "test_docker_warm_compilers",
 }
 
 
