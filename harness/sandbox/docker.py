@@ -481,6 +481,8 @@ class DockerSandbox(ClosingSandbox):
                 api.remove_container(container, force=True)
             raise
         if self.closed:
+            with contextlib.suppress(Exception):
+                stream.close()
             self.remove_container(container)
             raise DaemonTrouble("the sandbox was closed")
         return container, stream

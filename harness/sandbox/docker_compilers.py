@@ -19,6 +19,7 @@ import os
 import socket
 import struct
 import threading
+import weakref
 from dataclasses import dataclass, field
 
 from .docker import DockerSandbox, find_container_cgroup
@@ -37,7 +38,6 @@ class ContainerServer(Server):
     stream: object  # the attach response: keeps the socket alive
     stderr: bytearray = field(default_factory=bytearray)
     pump: threading.Thread | None = None
-    cpu_unknown: bool = False
 
     def send(self, data: bytes) -> None:
         try:
@@ -58,21 +58,28 @@ class DockerLauncher:
     """Starts compile servers as containers of a DockerSandbox (warm_compilers.ServerLauncher)."""
 
     def __init__(self, sandbox: DockerSandbox):
-        self.sandbox = sandbox
+        self.sandbox = weakref.ref(sandbox)  # the warm compilers must not keep their sandbox alive
+
+    def _backend(self) -> DockerSandbox:
+        sandbox = self.sandbox()
+        if sandbox is None:
+            raise ServerTrouble("the sandbox was closed")
+        return sandbox
 
     def start(self, needs, command, files, limits) -> Server:
-        image, where = self.sandbox.warm_files(needs)
+        sandbox = self._backend()
+        image, where = sandbox.warm_files(needs)
         if not where:
             raise ServerTrouble(f"the {needs.name} image carries no compile server files")
         argv = [part.replace("{files}", where) for part in command]
-        container, stream = self.sandbox.retry(
-            lambda: self.sandbox.start_compile_server(image, needs.name, argv, dict(needs.env), limits),
+        container, stream = sandbox.retry(
+            lambda: sandbox.start_compile_server(image, needs.name, argv, dict(needs.env), limits),
             "start a compile server's container")
         sock = getattr(stream, "_sock", stream)
         sock.settimeout(None)
         read_end, write_end = os.pipe()
         server = ContainerServer(process=None, folder=None, scratch=None, reader=FieldReader(read_end), log=None,
-                                 cgroup=find_container_cgroup(self.sandbox.client.api, container),
+                                 cgroup=find_container_cgroup(sandbox.client.api, container),
                                  container=container, sock=sock, stream=stream)
         server.pump = threading.Thread(target=_pump, args=(server, write_end), daemon=True,
                                        name=f"assay-compiler-{container[:12]}")
@@ -82,14 +89,16 @@ class DockerLauncher:
     def end(self, server: Server) -> None:
         """Remove the server's container; its stream and pipe close. Never raises."""
         with contextlib.suppress(Exception):
-            self.sandbox.remove_container(server.container)
+            self._backend().remove_container(server.container)  # else its close removed it
+        with contextlib.suppress(Exception):
+            server.sock.shutdown(socket.SHUT_RDWR)  # wakes the pump's recv, which a close alone does not
         for thing in (server.sock, server.stream):
             with contextlib.suppress(Exception):
                 thing.close()
+        with contextlib.suppress(OSError):
+            os.close(server.reader.fd)  # a pump stuck writing to the pipe gets EPIPE
         if server.pump is not None:
             server.pump.join(timeout=10)
-        with contextlib.suppress(OSError):
-            os.close(server.reader.fd)
 
     def close(self) -> None:
         pass  # every server is ended by end(); the sandbox's close removes the run's containers

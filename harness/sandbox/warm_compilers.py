@@ -5,7 +5,8 @@ declares none, or a backend without warm compilers, compiles cold as before. Two
 
 * ``server``: a long-lived compiler process (javac's API in one JVM, the TypeScript compiler's
   API in one Node process, mcs.exe in one Mono process) in a sandbox of its own, apart from the sandboxes where candidates
-  run: the backend's isolation (bubblewrap's namespaces and seccomp filter; none for ``none``),
+  run: the backend's isolation (bubblewrap's namespaces and seccomp filter; under Docker a
+  container of its own, docker_compilers.py; none for ``none``),
   no network, no host files beyond the system and the runtime's own read-only paths, a cgroup
   or rlimits at the compile step's limits. It is fed the cold compile command and the source
   and never runs what it compiles; the files it made are the only thing copied into the
@@ -15,8 +16,9 @@ declares none, or a backend without warm compilers, compiles cold as before. Two
 * ``prepared``: a file of the runtime turned once per toolchain into files the compile command
   reads (C++'s precompiled header; Go's index of its precompiled standard library, which lets
   the compiler and linker run without the go command), kept in a cache folder keyed by the
-  file's text, the build command and the toolchain's identity. The candidate's own compile
-  step, still in the candidate's sandbox, reads that folder read-only.
+  file's text, the build command and the toolchain's identity; under Docker they are built
+  into the runtime's image instead (images.py), once per image. The candidate's own compile
+  step, still in the candidate's sandbox, reads them read-only.
 
 Verdicts must equal the cold path's (``tests/test_warm_compilers.py`` compares them), so a
 warm result is used only when it is the cold compiler's answer: a server that crashes, runs
