@@ -304,6 +304,7 @@ class DockerSandbox(ClosingSandbox):
         self.client = None
         self.daemon: dict = {}
         self.images: dict[str, dict] = {}
+        self.warm_in_images: dict[str, str | None] = {}  # runtime -> its image's warm compiler files
         self.pools: dict[str, WarmPool | SandboxUnavailable] = {}
         self.orphans_removed = 0
         self.closed = False
@@ -418,7 +419,8 @@ class DockerSandbox(ClosingSandbox):
                 f"build it with: assay runtimes build {needs.name} (add --offline-base without a registry)"
             )
         facts = self.retry(lambda: inspect_image(self.client, tag), "look up an image") or {}
-        self.images[needs.name] = {"tag": tag, "id": image_id, "warm_files": image_warm_files(facts)}
+        self.images[needs.name] = {"tag": tag, "id": image_id}
+        self.warm_in_images[needs.name] = image_warm_files(facts)
         return WarmPool(self, lambda: self.start_box(image_id, needs.name))
 
     def warm_files(self, needs: RuntimeSandboxNeeds) -> tuple[str, str | None]:
@@ -427,8 +429,7 @@ class DockerSandbox(ClosingSandbox):
         SandboxUnavailable when the runtime has no image."""
         self.check()
         self.pool_for(needs)
-        found = self.images[needs.name]
-        return found["id"], found.get("warm_files")
+        return self.images[needs.name]["id"], self.warm_in_images.get(needs.name)
 
     # -- containers --
     def _create(self, image: str, command: list[str], labels: dict[str, str], memory: int, pids: int,
