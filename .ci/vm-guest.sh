@@ -47,7 +47,7 @@ fi
 say "assay sandbox doctor, as root:"
 python3 -m harness sandbox doctor
 # The plan, in two parts run side by side (one per CPU), each line of their output marked with
-# the part's name. limits: cgroup v2 limits, bombs, per-step peaks and 200 hostile candidates,
+# the part's name. limits: cgroup v2 limits, bombs, per-step peaks and 100 hostile candidates,
 # and the sandbox's isolation tests. corpus: the adversarial corpus (Python's, and C++'s memory
 # bomb), the limits under --sandbox none, and assay score as an unprivileged user in a
 # delegated group (the same without a group runs on CI's own cgroup v1 host).
