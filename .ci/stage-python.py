@@ -1,6 +1,6 @@
 #!/usr/bin/env python3
 """Copies what another Python (of the same minor version) or another user needs to run Assay
-from this installation: every file of the distributions pyproject.toml depends on, and pytest,
+from this installation: every file of the distributions pyproject.toml depends on, pytest and pytest-timeout,
 with their requirements (markers evaluated for this Python, no extras), into TARGET/deps; with
 --project, the working tree's files too (tracked and untracked ones git does not ignore) into
 TARGET. Used by .ci/vm-test.sh for the test VM's project disk and by tests/test_rootless.py,
@@ -62,7 +62,7 @@ def copy_distributions(target: Path) -> None:
                 shutil.copy2(source, target / file)
 
     declared = tomllib.loads((PROJECT / "pyproject.toml").read_text())["project"]["dependencies"]
-    for name in [Requirement(d).name for d in declared] + ["pytest"]:
+    for name in [Requirement(d).name for d in declared] + ["pytest", "pytest-timeout"]:
         add(name)
 
 

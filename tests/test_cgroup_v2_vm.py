@@ -33,6 +33,7 @@ def missing() -> str | None:
     return None
 
 
+@pytest.mark.timeout(BUDGET_SECONDS + 300)
 def test_limit_and_adversarial_tests_pass_in_a_cgroup_v2_vm():
     reason = missing()
     if reason and not os.environ.get("CI"):
