@@ -10,6 +10,7 @@ added here, as ``assay runtimes build`` would (a layer, seconds).
 
 from __future__ import annotations
 
+import contextlib
 import dataclasses
 import shutil
 import tempfile
@@ -191,3 +192,34 @@ def test_editing_a_prepared_file_or_its_build_names_a_new_image(tmp_path):
     assert "-w" in runtime.needs.warm_files.build
     tags.append(images.image_tag(runtime.needs))
     assert len(set(tags)) == 3, tags
+
+
+def test_an_image_whose_prepared_build_failed_is_labelled_so_and_compiles_cold(box, tmp_path):
+    runtime = runtime_with_image(box, "go")  # its toolchain layers are in the build cache then
+    folder = tmp_path / "go"
+    shutil.copytree(runtime.path, folder)
+    (folder / runtime.compile.warm.file).write_text("echo 'no standard library here' >&2\nexit 1\n", encoding="utf-8")
+    broken = load_runtime_folder(folder)
+    tag = images.image_tag(broken.needs)
+    offline = images.find_image(box.client, images.OFFLINE_BASE) is not None
+    try:
+        try:
+            base = images.ensure_base(box.client, None, offline, lambda message: None)
+            images.build_runtime_image(box.client, broken.needs, base, lambda message: None)
+        except images.ImageError as exc:
+            pytest.skip(f"cannot build {tag} here: {exc}")
+        assert images.image_warm_files(images.inspect_image(box.client, tag)) == ""
+        sandbox = backend.DockerSandbox()
+        try:
+            sandbox.check()
+            executor = Executor(sandbox, load_problem_set("conformance"), {"go": broken}, warm=True)
+            verdict = executor.execute(references(broken, "conformance")[0])
+            described = executor.compilers.describe()["go"]
+        finally:
+            sandbox.close()
+        assert verdict.outcome == "passed", verdict.detail
+        assert described.startswith("cold") and "failed to build" in described
+    finally:
+        for ref in (tag, f"{tag}-toolchain"):
+            with contextlib.suppress(Exception):
+                box.client.api.remove_image(ref, force=True)
