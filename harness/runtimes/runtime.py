@@ -84,8 +84,24 @@ def _stand_in(length: int) -> str:
     return secrets.token_hex((length + 1) // 2)[:length]
 
 
-def _fill(text: str, stand_ins: tuple[str, str], results_file: str, nonce: str) -> str:
-    return text.replace(stand_ins[0], results_file).replace(stand_ins[1], nonce)
+@dataclass
+class _Frame:
+    """A problem's program rendered with stand-ins for the code, the results file's name and the
+    nonce (Runtime.render_program): the text before and after the code. ``checked`` once a
+    filled-in program equalled a full rendering."""
+
+    problem: Problem
+    head: str
+    tail: str
+    results_file: str
+    nonce: str
+    checked: bool = False
+
+    def fill(self, code: str, results_file: str, nonce: str) -> str:
+        def put(text: str) -> str:
+            return text.replace(self.results_file, results_file).replace(self.nonce, nonce)
+
+        return put(self.head) + code + put(self.tail)
 
 
 @dataclass
@@ -108,8 +124,7 @@ class Runtime:
     unsupported_types: dict[str, str] = field(default_factory=dict)
     extraction: ExtractionSpec | None = None
     program: ProgramSetup | None = None
-    # Per (problem id, name and nonce lengths): (problem, head, tail, checked, stand-ins) of its
-    # rendered program (render_program).
+    # Per (problem id, name and nonce lengths): its program rendered with stand-ins (render_program).
     _frames: dict = field(default_factory=dict, init=False, repr=False, compare=False)
 
     @cached_property
@@ -271,14 +286,12 @@ class Runtime:
         frame = self._frame(problem, len(results_file), len(nonce)) if self._code_is_verbatim else None
         if frame is None:
             return self._render_program(problem, code, results_file, nonce)
-        head, tail, stand_ins = frame
-        filled = _fill(head, stand_ins, results_file, nonce) + code + _fill(tail, stand_ins, results_file, nonce)
-        key = (problem.id, len(results_file), len(nonce))
-        if not self._frames[key][3]:
+        filled = frame.fill(code, results_file, nonce)
+        if not frame.checked:
             if filled != self._render_program(problem, code, results_file, nonce):
                 self._code_is_verbatim = False  # this runtime's templates are rendered in full
                 return self._render_program(problem, code, results_file, nonce)
-            self._frames[key] = self._frames[key][:3] + (True,) + self._frames[key][4:]
+            frame.checked = True
         return filled
 
     def _render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
@@ -286,18 +299,18 @@ class Runtime:
         context.update(code=code, cases=problem.cases, results_file=results_file, nonce=nonce)
         return self.templates.get_template("program.j2").render(context)
 
-    def _frame(self, problem: Problem, results_length: int, nonce_length: int):
-        """(text before the code, text after it, the stand-ins) of ``problem``'s program, or None."""
+    def _frame(self, problem: Problem, results_length: int, nonce_length: int) -> _Frame | None:
+        """``problem``'s program around a stand-in for the code, or None where it cannot be split."""
         key = (problem.id, results_length, nonce_length)
         found = self._frames.get(key)
-        if found is None or found[0] is not problem:
+        if found is None or found.problem is not problem:
             code, results_file, nonce = (f"assay-code-{secrets.token_hex(16)}", _stand_in(results_length),
                                          _stand_in(nonce_length))
             parts = self._render_program(problem, code, results_file, nonce).split(code)
             if len(parts) != 2:
                 return None
-            found = self._frames[key] = (problem, parts[0], parts[1], False, (results_file, nonce))
-        return found[1], found[2], found[4]
+            found = self._frames[key] = _Frame(problem, parts[0], parts[1], results_file, nonce)
+        return found
 
     @cached_property
     def _code_is_verbatim(self) -> bool:

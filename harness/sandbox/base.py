@@ -26,6 +26,9 @@ class Workspace(Protocol):
 
     def write(self, name: str, content: str) -> None: ...
 
+    def write_bytes(self, name: str, data: bytes) -> None:
+        """A new file of these bytes (what a warm compiler made, say); ``write`` is its text form."""
+
     def read(self, name: str, max_bytes: int) -> bytes | None:
         """The file's first ``max_bytes`` bytes, or None if the candidate left no such file."""
 

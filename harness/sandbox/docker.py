@@ -38,6 +38,7 @@ import time
 import uuid
 from dataclasses import dataclass
 from pathlib import Path
+from typing import Callable
 
 from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
 from .base import ClosingSandbox, SandboxUnavailable
@@ -109,9 +110,21 @@ def _is_transient(exc: BaseException, container_gone: bool = False) -> bool:
 
 # --- the channel to a container's supervisor --------------------------------------------------
 
+def read_frame(exact: Callable[[int], bytes | None]) -> tuple[int, bytes] | None:
+    """One frame of a container's attached, multiplexed stream (the Engine API's attach
+    documentation: an 8-byte header of stream id, three zero bytes and the big-endian payload
+    size, then the payload): (stream id, 2 for stderr, payload), or None where ``exact``, which
+    reads that many bytes, finds the stream's end."""
+    header = exact(8)
+    if header is None:
+        return None
+    payload = exact(struct.unpack(">I", header[4:])[0])
+    return None if payload is None else (header[0], payload)
+
+
 class DockerChannel(Channel):
     """The container's attached stdin; replies come back in Docker's multiplexed stream frames
-    (8-byte header: stream id, three zero bytes, big-endian payload size)."""
+    (``read_frame``)."""
 
     def __init__(self, stream):
         super().__init__()
@@ -129,9 +142,7 @@ class DockerChannel(Channel):
 
     def _line(self, deadline: float) -> bytes:
         while b"\n" not in self.stdout:
-            header = self._exact(8, deadline)
-            stream, size = header[0], struct.unpack(">I", header[4:])[0]
-            payload = self._exact(size, deadline)
+            stream, payload = read_frame(lambda size: self._exact(size, deadline))  # _exact raises at the end
             if stream == 2:
                 self.stderr = (self.stderr + payload)[-4096:]
             else:

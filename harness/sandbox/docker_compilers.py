@@ -17,12 +17,11 @@ from __future__ import annotations
 import contextlib
 import os
 import socket
-import struct
 import threading
 import weakref
 from dataclasses import dataclass, field
 
-from .docker import DockerSandbox, find_container_cgroup
+from .docker import DockerSandbox, find_container_cgroup, read_frame
 from .supervised import brief
 from .warm_compilers import FieldReader, Server, ServerTrouble
 
@@ -105,17 +104,15 @@ class DockerLauncher:
 
 
 def _pump(server: ContainerServer, write_end: int) -> None:
-    """Docker's stream frames (8-byte header: stream id, three zero bytes, big-endian size; the
-    Engine API's attach documentation) to the stdout pipe and the stderr tail, until it ends."""
+    """Docker's stream frames (docker.read_frame) to the stdout pipe and the stderr tail, until
+    it ends."""
     try:
         while True:
-            header = _exact(server.sock, 8)
-            if header is None:
+            frame = read_frame(lambda size: _exact(server.sock, size))
+            if frame is None:
                 return
-            payload = _exact(server.sock, struct.unpack(">I", header[4:])[0])
-            if payload is None:
-                return
-            if header[0] == 2:
+            stream, payload = frame
+            if stream == 2:
                 server.stderr += payload
                 del server.stderr[:-STDERR_KEPT]
             else:

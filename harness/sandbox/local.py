@@ -44,10 +44,13 @@ class LocalWorkspace:
         self.owner = owner
 
     def write(self, name: str, content: str) -> None:
+        self.write_bytes(name, content.encode("utf-8"))
+
+    def write_bytes(self, name: str, data: bytes) -> None:
         # The harness may run as root and the folder is the candidate's: a link planted there
         # (by a process that outlived an earlier candidate in a warm sandbox) must never be
         # followed, and only the file just made is given to the sandbox user, by descriptor.
-        write_new_file(str(self.path), name, content.encode("utf-8"), owner=self.owner)
+        write_new_file(str(self.path), name, data, owner=self.owner)
 
     def read(self, name: str, max_bytes: int) -> bytes | None:
         # No link followed, on the way or at the end; a FIFO in its place reads as missing.

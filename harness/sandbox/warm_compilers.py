@@ -51,9 +51,9 @@ from ..vocabulary import Limits, RuntimeSandboxNeeds, StepResult
 from .base import SandboxError
 from .cgroups import Cgroup
 from .images import prepared_file_name
-from .local import LOG, LocalWorkspace, candidate_env, default_work_root, private_folder, remove_folder
+from .local import LOG, candidate_env, default_work_root, private_folder, remove_folder
 from .process import join_and_drop
-from .step_supervisor import keep_tail, write_new_file
+from .step_supervisor import keep_tail
 
 ENABLE_ENV = "ASSAY_WARM_COMPILERS"
 MAX_USES = 500  # compiles one server serves before a fresh one replaces it
@@ -482,9 +482,7 @@ class ServerCompiler:
     # -- one compile --
     def compile(self, space, source_file: str, source: str, limits: Limits) -> StepResult:
         server = self._take(limits, {source_file: source.encode("utf-8")})
-        if server is None or not isinstance(space, LocalWorkspace) and not hasattr(space, "write_bytes"):
-            if server is not None:
-                self._give_back(server)
+        if server is None:
             return self.cold.compile(space, source_file, source, limits)
         started = time.monotonic()
         cpu_before = server.cpu_seconds()
@@ -522,10 +520,7 @@ class ServerCompiler:
             result.file_size_exceeded = True
             return result
         for name, data in made.items():
-            if isinstance(space, LocalWorkspace):
-                write_new_file(str(space.path), name, data, owner=space.owner)
-            else:  # a container's /work (docker.py): the same checks, by its supervisor
-                space.write_bytes(name, data)
+            space.write_bytes(name, data)  # no link followed, as for the candidate's own files
         with self.lock:
             self.warm_compiles += 1
             self.troubles = 0
