@@ -1,0 +1,101 @@
+"""Where an interpreted candidate's overhead goes, per step (issue 15's interpreted target):
+one step through a warm bubblewrap sandbox against the same command started directly, how much
+of the step the harness's side takes (the round trip over the supervisor's own wall time), and
+what Python's subprocess costs with and without a preexec function (which the step supervisor
+uses to set a step's rlimits, and which makes subprocess fork instead of vfork). Medians of
+``--repeat`` runs, measured side by side in one run.
+
+    python benchmarks/step_overhead.py
+    python benchmarks/step_overhead.py --languages python,ruby --repeat 60
+"""
+
+from __future__ import annotations
+
+import argparse
+import resource
+import statistics
+import subprocess
+import sys
+import tempfile
+import time
+from pathlib import Path
+
+ROOT = Path(__file__).resolve().parents[1]
+sys.path.insert(0, str(ROOT))
+
+from harness.runtimes import load_runtime  # noqa: E402
+from harness.sandbox import make_sandbox  # noqa: E402
+from harness.sandbox.local import candidate_env  # noqa: E402
+
+ONE_LINERS = {"python": "print(1)\n", "ruby": "puts 1\n", "perl": "print 1;\n", "lua": "print(1)\n",
+              "php": "<?php echo 1;\n", "javascript": "console.log(1)\n"}
+
+
+def median_ms(samples: list[float]) -> float:
+    return 1000 * statistics.median(samples)
+
+
+def steps(box, runtime, repeat: int) -> None:
+    name = runtime.source_file
+    text = ONE_LINERS[runtime.name]
+    folder = tempfile.mkdtemp(prefix="assay-step-")
+    Path(folder, name).write_text(text, encoding="utf-8")
+    env = candidate_env(runtime.needs, {}, home=folder, tmp=folder)
+    limits = runtime.step_limits("run")
+    commands = ([list(runtime.compile.command)] if runtime.compile else []) + [list(runtime.run.command)]
+    for command in commands:
+        inside, walls, direct = [], [], []
+        with box.workspace(runtime.needs) as space:
+            space.write(name, text)
+            for _ in range(3):
+                space.run(command, limits, {})
+            for _ in range(repeat):  # the two take turns, so load changes hit both alike
+                started = time.perf_counter()
+                result = space.run(command, limits, {})
+                inside.append(time.perf_counter() - started)
+                walls.append(result.wall_seconds)
+                started = time.perf_counter()
+                subprocess.run(command, cwd=folder, env=env, capture_output=True, start_new_session=True)
+                direct.append(time.perf_counter() - started)
+        print(f"{runtime.name:<11} {' '.join(command).split(chr(10))[0][:40]:<40} sandboxed {median_ms(inside):6.1f} ms  "
+              f"direct {median_ms(direct):6.1f} ms  over direct {median_ms(inside) - median_ms(direct):+5.1f} ms  "
+              f"harness side {median_ms(inside) - median_ms(walls):4.1f} ms")
+
+
+def spawns(repeat: int) -> None:
+    def limit_core() -> None:
+        resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
+
+    timings: dict[str, list[float]] = {"with preexec_fn": [], "without": []}
+    for _ in range(repeat):
+        for label, extra in (("with preexec_fn", {"preexec_fn": limit_core}), ("without", {})):
+            started = time.perf_counter()
+            subprocess.run(["/bin/true"], capture_output=True, start_new_session=True, close_fds=True, **extra)
+            timings[label].append(time.perf_counter() - started)
+    with_ms, without_ms = (median_ms(timings[k]) for k in ("with preexec_fn", "without"))
+    print(f"spawning /bin/true: with a preexec_fn {with_ms:.2f} ms, without {without_ms:.2f} ms "
+          f"({with_ms / without_ms:.1f}x)")
+
+
+def main() -> int:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--languages", default=",".join(ONE_LINERS), help="comma-separated interpreted runtimes")
+    parser.add_argument("--repeat", type=int, default=40, help="steps per command and configuration")
+    args = parser.parse_args()
+    box = make_sandbox("bubblewrap")
+    box.check()
+    try:
+        for name in [n for n in args.languages.split(",") if n]:
+            runtime = load_runtime(name)
+            if name not in ONE_LINERS or runtime.toolchain_version() is None:
+                print(f"skipping {name}: not an installed interpreted runtime", file=sys.stderr)
+                continue
+            steps(box, runtime, args.repeat)
+    finally:
+        box.close()
+    spawns(args.repeat * 3)
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
