@@ -13,6 +13,7 @@ from __future__ import annotations
 
 import argparse
 import resource
+import shutil
 import statistics
 import subprocess
 import sys
@@ -43,6 +44,13 @@ def steps(box, runtime, repeat: int) -> None:
     env = candidate_env(runtime.needs, {}, home=folder, tmp=folder)
     limits = runtime.step_limits("run")
     commands = ([list(runtime.compile.command)] if runtime.compile else []) + [list(runtime.run.command)]
+    try:
+        measure(box, runtime, commands, folder, env, limits, name, text, repeat)
+    finally:
+        shutil.rmtree(folder, ignore_errors=True)
+
+
+def measure(box, runtime, commands, folder, env, limits, name, text, repeat) -> None:
     for command in commands:
         inside, walls, direct = [], [], []
         with box.workspace(runtime.needs) as space:
