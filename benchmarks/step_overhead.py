@@ -1,9 +1,9 @@
 """Where an interpreted candidate's overhead goes, per step (issue 15's interpreted target):
 one step through a warm bubblewrap sandbox against the same command started directly, how much
 of the step the harness's side takes (the round trip over the supervisor's own wall time), and
-what Python's subprocess costs with and without a preexec function (which the step supervisor
-uses to set a step's rlimits, and which makes subprocess fork instead of vfork). Medians of
-``--repeat`` runs, measured side by side in one run.
+what starting a step with its rlimits costs the supervisor's two ways (its shell launcher, with
+vfork, and its fallback, a preexec function, which makes subprocess fork) against a plain
+start. Medians of ``--repeat`` runs, measured side by side in one run.
 
     python benchmarks/step_overhead.py
     python benchmarks/step_overhead.py --languages python,ruby --repeat 60
@@ -12,7 +12,6 @@ uses to set a step's rlimits, and which makes subprocess fork instead of vfork).
 from __future__ import annotations
 
 import argparse
-import resource
 import shutil
 import statistics
 import subprocess
@@ -27,6 +26,7 @@ sys.path.insert(0, str(ROOT))
 from harness.runtimes import load_runtime  # noqa: E402
 from harness.sandbox import make_sandbox  # noqa: E402
 from harness.sandbox.local import candidate_env  # noqa: E402
+from harness.sandbox.step_supervisor import ShellLauncher, step_preexec, step_rlimits  # noqa: E402
 
 ONE_LINERS = {"python": "print(1)\n", "ruby": "puts 1\n", "perl": "print 1;\n", "lua": "print(1)\n",
               "php": "<?php echo 1;\n", "javascript": "console.log(1)\n"}
@@ -71,18 +71,31 @@ def measure(box, runtime, commands, folder, env, limits, name, text, repeat) -> 
 
 
 def spawns(repeat: int) -> None:
-    def limit_core() -> None:
-        resource.setrlimit(resource.RLIMIT_CORE, (0, 0))
-
-    timings: dict[str, list[float]] = {"with preexec_fn": [], "without": []}
-    for _ in range(repeat):
-        for label, extra in (("with preexec_fn", {"preexec_fn": limit_core}), ("without", {})):
-            started = time.perf_counter()
-            subprocess.run(["/bin/true"], capture_output=True, start_new_session=True, close_fds=True, **extra)
-            timings[label].append(time.perf_counter() - started)
-    with_ms, without_ms = (median_ms(timings[k]) for k in ("with preexec_fn", "without"))
-    print(f"spawning /bin/true: with a preexec_fn {with_ms:.2f} ms, without {without_ms:.2f} ms "
-          f"({with_ms / without_ms:.1f}x)")
+    """The ways the step supervisor can start a step with its limits, and a plain start without
+    any, side by side: the fallback (a ``preexec_fn``, so subprocess forks) against the shell
+    launcher (vfork, then /bin/sh sets the limits and execs the program)."""
+    folder = tempfile.mkdtemp(prefix="assay-spawn-")
+    launcher = ShellLauncher.probe(folder)
+    rlimits = step_rlimits({"cpu_seconds": 10, "max_file_mb": 16, "memory_mb": 512, "max_processes": 64}, False, False)
+    env = {"PATH": "/usr/bin:/bin"}
+    ways = {"preexec_fn (fallback)": (["/bin/true"], {"preexec_fn": step_preexec(rlimits)}),
+            "plain, no limits": (["/bin/true"], {})}
+    if launcher is not None:
+        ways["shell launcher"] = (launcher.command(["/bin/true"], env, folder, rlimits)[0], {})
+    timings: dict[str, list[float]] = {label: [] for label in ways}
+    try:
+        for _ in range(repeat):
+            for label, (command, extra) in ways.items():
+                started = time.perf_counter()
+                subprocess.run(command, cwd=folder, env=env, capture_output=True, start_new_session=True,
+                               close_fds=True, **extra)
+                timings[label].append(time.perf_counter() - started)
+    finally:
+        shutil.rmtree(folder, ignore_errors=True)
+    plain = median_ms(timings["plain, no limits"])
+    print("starting /bin/true with a step's limits (median ms, ratio to a plain start):")
+    for label in ways:
+        print(f"  {label:<22} {median_ms(timings[label]):5.2f} ms  {median_ms(timings[label]) / plain:4.1f}x")
 
 
 def main() -> int:

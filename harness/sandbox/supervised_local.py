@@ -62,6 +62,7 @@ class Slot(Member):
     memory: int = 0
     processes: int = 0
     supervisor: int | None = None  # a pidfd for the supervisor
+    launcher: str | None = None  # the shell that starts its steps (None: they start by fork, slower)
 
 
 class SupervisedWorkspace(LocalWorkspace):
@@ -252,6 +253,7 @@ class SupervisedLocalSandbox(LocalSandbox):
         try:
             hello = slot.channel.call({"op": "hello"}, HELLO_SECONDS)
             self.check_hello(hello, process)
+            slot.launcher = hello.get("launcher")
             slot.supervisor = self.supervisor_pidfd(process)
         except BaseException:
             self.discard(slot)
