@@ -6,6 +6,7 @@ placeholders. The reference is jinja2 rendering the template in full each time."
 from __future__ import annotations
 
 import secrets
+import shutil
 
 import pytest
 
@@ -22,7 +23,7 @@ CODES = [
 
 
 def full(runtime, problem, code, results_file, nonce) -> str:
-    return runtime._render_program(problem, code, results_file, nonce)
+    return runtime._render_program(problem, runtime._candidate_source(problem, code), results_file, nonce)
 
 
 @pytest.mark.parametrize("language", available_runtimes())
@@ -40,17 +41,38 @@ def test_a_program_filled_into_its_problems_driver_is_the_full_rendering(languag
                         full(runtime, problem, code, results_file, nonce), (set_name, problem.id)
 
 
-def test_runtimes_whose_driver_uses_the_code_itself_are_rendered_in_full():
-    # PHP's program.j2 looks at how the code starts; it must never be filled into a frame.
-    assert load_runtime("php")._code_is_verbatim is False
-    assert load_runtime("python")._code_is_verbatim is True
+def test_a_runtime_that_looks_at_the_code_does_so_in_its_source_template(tmp_path):
+    """PHP looks at how an answer opens (its own ``<?php``, a ``declare``, a closing ``?>``) in
+    source.j2, so that program.j2 takes the code verbatim and each problem's driver is rendered
+    once. Its programs must be those of one template doing both: the reference is a copy of the
+    runtime whose program.j2 includes that logic in place of ``{{ code }}``, which jinja2
+    renders in full for every candidate (an include is never framed)."""
+    php = load_runtime("php")
+    folder = tmp_path / "php"
+    shutil.copytree(php.path, folder)
+    (folder / "source.j2").rename(folder / "opening.j2")
+    program = folder / "program.j2"
+    text = program.read_text(encoding="utf-8")
+    assert text.count("{{ code }}\n") == 1
+    program.write_text(text.replace("{{ code }}\n", '{% include "opening.j2" %}\n\n'), encoding="utf-8")
+    combined = load_runtime(str(folder))
+    assert php._code_is_verbatim and not combined._code_is_verbatim
+    body = "function f($x) {\n    return $x;\n}\n"
+    for problem in load_problem_set("conformance").problems.values():
+        if problem.kind != "function" or php.refusal(problem) is not None:
+            continue
+        opener = php.templates.get_template("preamble.j2").render(php.context(problem))
+        for code in (body, opener + body, opener + "<?php\n" + body, opener + "  <?php\ndeclare(strict_types=1);\n" + body,
+                     opener + "declare(strict_types=1);\n" + body, body + "?>\n", opener + body + "?>", opener, ""):
+            nonce = secrets.token_hex(16)
+            results_file = f".results-{nonce[:12]}.jsonl"
+            assert php.render_program(problem, code, results_file, nonce) == \
+                combined.render_program(problem, code, results_file, nonce), (problem.id, code)
 
 
 def test_a_template_that_transforms_the_nonce_falls_back_to_full_rendering(tmp_path):
     runtime = load_runtime("python")
     folder = tmp_path / "python"
-    import shutil
-
     shutil.copytree(runtime.path, folder)
     program = folder / "program.j2"
     program.write_text(program.read_text(encoding="utf-8") + "# {{ nonce[:4] | upper }}\n", encoding="utf-8")

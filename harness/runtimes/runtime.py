@@ -283,6 +283,7 @@ class Runtime:
         for the three, and each candidate's is filled in. The first filled-in program of every
         problem is checked against a full rendering; a runtime whose templates treat the nonce
         or the name otherwise is rendered in full from then on."""
+        code = self._candidate_source(problem, code)
         frame = self._frame(problem, len(results_file), len(nonce)) if self._code_is_verbatim else None
         if frame is None:
             return self._render_program(problem, code, results_file, nonce)
@@ -293,6 +294,20 @@ class Runtime:
                 return self._render_program(problem, code, results_file, nonce)
             frame.checked = True
         return filled
+
+    def _candidate_source(self, problem: Problem, code: str) -> str:
+        """The code as the program starts with it: source.j2's rendering where the runtime has
+        one (a template that must look at the code, kept apart so that program.j2 can use it
+        verbatim), else the code itself."""
+        if not self._has_source_template:
+            return code
+        context = self.context(problem)
+        context.update(code=code)
+        return self.templates.get_template("source.j2").render(context)
+
+    @cached_property
+    def _has_source_template(self) -> bool:
+        return (self.path / "source.j2").is_file()
 
     def _render_program(self, problem: Problem, code: str, results_file: str, nonce: str) -> str:
         context = self.context(problem)
