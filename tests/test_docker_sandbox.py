@@ -30,6 +30,7 @@ from harness.sandbox import docker as backend
 from harness.sandbox import images
 
 from .test_scoring import ASSAY, write_dump
+from .test_step_launch import limits_table
 
 ROOT = Path(__file__).resolve().parents[1]
 STEP = Limits(wall_seconds=10, cpu_seconds=10)
@@ -184,6 +185,24 @@ def test_a_runtime_kept_outside_the_project_is_built_and_scored_with_runtimes_di
 
 
 # --- limits -----------------------------------------------------------------------------------
+
+def test_a_step_in_a_container_starts_through_the_launcher_with_its_limits_and_default_signals(docker_box):
+    """As under bubblewrap (tests/test_step_launch.py): read from the kernel's account of the
+    step's own process (proc(5)), started by the image's /bin/sh."""
+    limits = Limits(wall_seconds=10, cpu_seconds=3, max_file_mb=5)
+    with docker_box.workspace(load_runtime("python").needs) as space:
+        assert space.box.launcher == "/bin/sh"
+        table, adj, status, argv = (space.run(command, limits, {}) for command in (
+            ["cat", "/proc/self/limits"], ["cat", "/proc/self/oom_score_adj"], ["cat", "/proc/self/status"],
+            ["cat", "/proc/self/cmdline", "two words", ""]))
+    assert limits_table(table.stdout)["Max cpu time"] == ("3", "4")
+    assert limits_table(table.stdout)["Max file size"] == (str(5 * 2**20),) * 2
+    assert limits_table(table.stdout)["Max core file size"] == ("0", "0")
+    assert adj.stdout.strip() == "1000"
+    masks = dict(line.split(":\t", 1) for line in status.stdout.splitlines() if line.startswith("Sig"))
+    assert int(masks["SigIgn"], 16) == 0 and int(masks["SigBlk"], 16) == 0, masks
+    assert argv.stdout == "cat\0/proc/self/cmdline\0two words\0\0"
+
 
 @pytest.mark.parametrize("command,limits,flag", [
     ("exec sleep 30", Limits(wall_seconds=1, cpu_seconds=1), "timed_out"),

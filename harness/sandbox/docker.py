@@ -522,7 +522,8 @@ class DockerSandbox(ClosingSandbox):
             with contextlib.suppress(Exception):
                 api.remove_container(container, force=True)
             raise
-        box = Box(id=container, channel=channel, memory=memory, pids=pids, cgroup=find_container_cgroup(api, container))
+        box = Box(id=container, channel=channel, memory=memory, pids=pids, cgroup=find_container_cgroup(api, container),
+                  launcher=hello.get("launcher"))
         if self.closed:
             self.discard(box)
             raise DaemonTrouble("the sandbox was closed")

@@ -169,6 +169,7 @@ class Member:
     served: int = 0
     spoiled: str | None = None
     reset_seq: int | None = None  # the reset sent when the last candidate left, reply unread
+    launcher: str | None = None  # the shell its supervisor starts steps through (None: by fork, slower)
 
     def settle(self) -> None:
         """Read the pending reset's reply: the sandbox is reusable only if the last candidate

@@ -62,7 +62,6 @@ class Slot(Member):
     memory: int = 0
     processes: int = 0
     supervisor: int | None = None  # a pidfd for the supervisor
-    launcher: str | None = None  # the shell that starts its steps (None: they start by fork, slower)
 
 
 class SupervisedWorkspace(LocalWorkspace):
