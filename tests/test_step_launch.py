@@ -136,3 +136,14 @@ def test_a_limit_above_the_supervisors_own_takes_the_fallback(tmp_path):
     assert launcher.command(["/bin/true"], {"PATH": "/usr/bin:/bin"}, str(tmp_path), rlimits) is not None
     launcher.hard[resource.RLIMIT_CPU] = 2  # below the step's hard CPU limit of 4 s
     assert launcher.command(["/bin/true"], {"PATH": "/usr/bin:/bin"}, str(tmp_path), rlimits) is None
+
+
+def test_a_program_named_like_an_option_takes_the_fallback(tmp_path):
+    """dash's exec takes no options, but other shells' may read "-x" as one of theirs."""
+    program = tmp_path / "-probe"
+    program.write_text("#!/bin/sh\n", encoding="utf-8")
+    program.chmod(0o755)
+    launcher = ShellLauncher.probe(str(tmp_path))
+    rlimits = step_rlimits(LIMITS.as_dict(), False, False)
+    assert launcher.command(["./-probe"], {"PATH": "/usr/bin:/bin"}, str(tmp_path), rlimits) is not None
+    assert launcher.command(["-probe"], {"PATH": str(tmp_path)}, str(tmp_path), rlimits) is None

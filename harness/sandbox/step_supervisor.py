@@ -244,8 +244,8 @@ class ShellLauncher:
     is the pipe size, dash's the process count). ``command`` declines a step whose start the
     shell could treat differently: a program that is not an ELF file or a ``#!`` script (a
     shell runs such a file as a shell script where exec refuses it), a limit above the
-    supervisor's own hard limit (subprocess fails that step), or an environment with no PATH or
-    a PWD of its own (the shell would supply those). A declined step takes the ``preexec_fn``
+    supervisor's own hard limit (subprocess fails that step), an environment with no PATH or
+    a PWD of its own (the shell would supply those), or a program named like an option. A declined step takes the ``preexec_fn``
     path. When the shell fails (``set -e``: a limit not set, a program not started) its message
     starts with the step's mark, a random ``$0`` that the step's program never sees, so that
     no program can pass off its own failure as one of starting it."""
@@ -312,8 +312,9 @@ class ShellLauncher:
     def command(self, argv, env, cwd, rlimits):
         """The launcher's argv for this step and its mark, or None where the step must take
         the fallback."""
-        if not argv or "PATH" not in env or "PWD" in env or not self.within_hard_limits(rlimits):
-            return None
+        if not argv or argv[0].startswith("-") or "PATH" not in env or "PWD" in env \
+                or not self.within_hard_limits(rlimits):
+            return None  # ("-x": a shell's exec may read it as an option)
         for which, pair in rlimits.items():
             if any(value % self.UNITS.get(self.FLAGS[which], 1) for value in pair):
                 return None
