@@ -69,7 +69,7 @@ class Limits:
         return replace(self, **patch.set_fields())
 
     def as_dict(self) -> dict:
-        return asdict(self)
+        return {name: getattr(self, name) for name in LIMIT_NAMES}  # asdict's deep copies cost per step
 
 
 LIMIT_NAMES = tuple(f.name for f in fields(Limits))
@@ -121,7 +121,7 @@ class LimitOverrides:
         return cls(**values)
 
     def set_fields(self) -> dict:
-        return {k: v for k, v in asdict(self).items() if v is not None}
+        return {name: value for name in LIMIT_NAMES if (value := getattr(self, name)) is not None}
 
     def then(self, later: "LimitOverrides") -> "LimitOverrides":
         """These overrides with ``later``'s on top."""

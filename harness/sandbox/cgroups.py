@@ -51,6 +51,8 @@ class Cgroup:
     dirs: tuple[Path, ...]
     _peak_fd: int | None = field(default=None, repr=False, compare=False)
     _peak_resettable: bool | None = field(default=None, repr=False, compare=False)
+    _swappiness_set: bool = field(default=False, repr=False, compare=False)
+    _paths: dict = field(default_factory=dict, repr=False, compare=False)
 
     @property
     def procs_files(self) -> tuple[str, ...]:
@@ -62,6 +64,13 @@ class Cgroup:
     def _pids_dir(self) -> Path | None:
         return self.dirs[-1] if self.version == 2 or len(self.dirs) > 1 else None
 
+    def _file(self, name: str, pids: bool = False) -> str:
+        """A control file's path, made once: steps read and write these several times each."""
+        path = self._paths.get((name, pids))
+        if path is None:
+            path = self._paths[name, pids] = str((self._pids_dir() if pids else self._memory_dir()) / name)
+        return path
+
     @property
     def limits_processes(self) -> bool:
         """Whether the group caps the process count (else RLIMIT_NPROC must)."""
@@ -70,25 +79,25 @@ class Cgroup:
     def oom_kills(self) -> int:
         """How many processes the group's memory limit has killed so far."""
         name = "memory.events" if self.version == 2 else "memory.oom_control"
-        return _read_keyed(self._memory_dir() / name).get("oom_kill", 0)
+        return _read_keyed(self._file(name)).get("oom_kill", 0)
 
     def oom_killed(self) -> bool:
         return self.oom_kills() > 0
 
     def peak_bytes(self) -> int:
         name = "memory.peak" if self.version == 2 else "memory.max_usage_in_bytes"
-        return _read_int(self._memory_dir() / name)
+        return _read_int(self._file(name))
 
     def usage_bytes(self) -> int:
         name = "memory.current" if self.version == 2 else "memory.usage_in_bytes"
-        return _read_int(self._memory_dir() / name)
+        return _read_int(self._file(name))
 
     def reset_peak(self) -> bool:
         """Start a new peak reading on v1; False where the kernel cannot (v2: see ``step_peak``)."""
         if self.version == 2:
             return False
         try:
-            (self._memory_dir() / "memory.max_usage_in_bytes").write_text("0")
+            _write(self._file("memory.max_usage_in_bytes"), "0")
         except OSError:
             return False
         return True
@@ -136,23 +145,25 @@ class Cgroup:
         memory.swap.max, no memory.memsw files) swap cannot be capped: the doctor says so."""
         memory = self._memory_dir()
         if self.version == 2:
-            (memory / "memory.max").write_text(str(memory_bytes))
+            _write(self._file("memory.max"), str(memory_bytes))
             if (memory / "memory.swap.max").exists():
-                (memory / "memory.swap.max").write_text("0")
+                _write(self._file("memory.swap.max"), "0")
         else:
             raising = old_memory is not None and memory_bytes > old_memory
             if raising:  # the memory+swap ceiling first
-                _try_write(memory / "memory.memsw.limit_in_bytes", str(memory_bytes))
-            (memory / "memory.limit_in_bytes").write_text(str(memory_bytes))
+                _try_write(self._file("memory.memsw.limit_in_bytes"), str(memory_bytes))
+            _write(self._file("memory.limit_in_bytes"), str(memory_bytes))
             if not raising:
-                _try_write(memory / "memory.memsw.limit_in_bytes", str(memory_bytes))
-            _try_write(memory / "memory.swappiness", "0")
+                _try_write(self._file("memory.memsw.limit_in_bytes"), str(memory_bytes))
+            if not self._swappiness_set:  # a setting of the group's own: once is enough
+                _try_write(memory / "memory.swappiness", "0")
+                self._swappiness_set = True
         pids = self._pids_dir()
         if pids is not None:
             if self.version == 2:
-                _try_write(pids / "pids.max", str(max_processes))
+                _try_write(self._file("pids.max", pids=True), str(max_processes))
             else:
-                (pids / "pids.max").write_text(str(max_processes))
+                _write(self._file("pids.max", pids=True), str(max_processes))
 
     def members(self) -> set[int]:
         pids: set[int] = set()
@@ -396,30 +407,47 @@ def _own_v2_group(root: Path) -> Path | None:
     return None
 
 
-def _read_keyed(path: Path) -> dict[str, int]:
+def _read(path: Path | str) -> str:
+    """A control file's text, by plain system calls (pathlib's objects cost per step)."""
+    fd = os.open(path, os.O_RDONLY | os.O_CLOEXEC)
     try:
-        pairs = (line.split() for line in path.read_text().splitlines())
+        return os.read(fd, 1 << 16).decode()
+    finally:
+        os.close(fd)
+
+
+def _write(path: Path | str, value: str) -> None:
+    fd = os.open(path, os.O_WRONLY | os.O_CLOEXEC)
+    try:
+        os.write(fd, value.encode())
+    finally:
+        os.close(fd)
+
+
+def _read_keyed(path: Path | str) -> dict[str, int]:
+    try:
+        pairs = (line.split() for line in _read(path).splitlines())
         return {p[0]: int(p[1]) for p in pairs if len(p) == 2 and p[1].isdigit()}
     except OSError:
         return {}
 
 
-def _read_int(path: Path) -> int:
+def _read_int(path: Path | str) -> int:
     try:
-        return int(path.read_text().split()[0])
+        return int(_read(path).split()[0])
     except (OSError, ValueError, IndexError):
         return 0
 
 
-def _read_text(path: Path) -> str | None:
+def _read_text(path: Path | str) -> str | None:
     try:
-        return path.read_text().strip()
+        return _read(path).strip()
     except OSError:
         return None
 
 
-def _try_write(path: Path, value: str) -> None:
+def _try_write(path: Path | str, value: str) -> None:
     try:
-        path.write_text(value)
+        _write(path, value)
     except OSError:
         pass
