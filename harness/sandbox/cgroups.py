@@ -156,7 +156,7 @@ class Cgroup:
             if not raising:
                 _try_write(self._file("memory.memsw.limit_in_bytes"), str(memory_bytes))
             if not self._swappiness_set:  # a setting of the group's own: once is enough
-                _try_write(memory / "memory.swappiness", "0")
+                _try_write(self._file("memory.swappiness"), "0")
                 self._swappiness_set = True
         pids = self._pids_dir()
         if pids is not None:

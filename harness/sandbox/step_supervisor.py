@@ -245,8 +245,9 @@ class ShellLauncher:
     shell could treat differently: a program that is not an ELF file or a ``#!`` script (a
     shell runs such a file as a shell script where exec refuses it), a limit above the
     supervisor's own hard limit (subprocess fails that step), an environment with no PATH or
-    a PWD of its own (the shell would supply those), or a program named like an option. A declined step takes the ``preexec_fn``
-    path. When the shell fails (``set -e``: a limit not set, a program not started) its message
+    a PWD of its own (the shell would supply those), or a program named like an option (some
+    shells' exec reads "-x" as one of its own). A declined step takes the ``preexec_fn`` path.
+    When the shell fails (``set -e``: a limit not set, a program not started) its message
     starts with the step's mark, a random ``$0`` that the step's program never sees, so that
     no program can pass off its own failure as one of starting it."""
 
@@ -285,9 +286,10 @@ class ShellLauncher:
         seen = {}
         for line in lines:
             for which, title in cls.TITLES.items():
-                fields = line[len(title):].split()
-                if line.startswith(title + " ") and fields[0].isdigit() and fields[1].isdigit():
-                    seen[which] = (int(fields[0]), int(fields[1]))
+                if line.startswith(title + " "):
+                    fields = line[len(title):].split()
+                    if fields[0].isdigit() and fields[1].isdigit():
+                        seen[which] = (int(fields[0]), int(fields[1]))
         return launcher if seen == cls.PROBE else None
 
     def within_hard_limits(self, rlimits):
@@ -314,7 +316,7 @@ class ShellLauncher:
         the fallback."""
         if not argv or argv[0].startswith("-") or "PATH" not in env or "PWD" in env \
                 or not self.within_hard_limits(rlimits):
-            return None  # ("-x": a shell's exec may read it as an option)
+            return None
         for which, pair in rlimits.items():
             if any(value % self.UNITS.get(self.FLAGS[which], 1) for value in pair):
                 return None
@@ -867,8 +869,8 @@ def main():
     # exec keeps ignored signals ignored. So are those ignored by whoever started the supervisor
     # (nohup's SIGHUP, say), but SIGPIPE and SIGXFSZ, which Python ignores for its own sake and
     # subprocess restores in the child.
-    inherited = [s for s in signal.valid_signals() if s not in (signal.SIGPIPE, signal.SIGXFSZ, signal.SIGKILL, signal.SIGSTOP)
-                 and signal.getsignal(s) == signal.SIG_IGN]
+    kept = (signal.SIGPIPE, signal.SIGXFSZ, signal.SIGKILL, signal.SIGSTOP)
+    inherited = [s for s in signal.valid_signals() if s not in kept and signal.getsignal(s) == signal.SIG_IGN]
     for sig in set(DROPPED) | set(inherited):
         signal.signal(sig, drop_signal)
         signal.siginterrupt(sig, False)
